@@ -1,0 +1,133 @@
+import { EngineError } from './engine-error.js';
+import type { Orientation } from './lattice.js';
+
+/** How a piece contributes to the value: a constant, a named formal variable, or y_j − y_i by position. */
+export type WeightSpec =
+  | { readonly type: 'integer'; readonly value: number }
+  | { readonly type: 'variable'; readonly name: string }
+  | { readonly type: 'position' };
+
+/** One unit triangle a puzzle may use; `labels` are clockwise: up = (left, right, bottom), down = (top, right, left). */
+export interface Piece {
+  readonly name: string;
+  readonly kind: string;
+  readonly orientation: Orientation;
+  readonly labels: readonly [string, string, string];
+  readonly weight: WeightSpec;
+}
+
+/** A validated piece set over a finite alphabet; boundary labels are single characters. */
+export interface PieceSet {
+  readonly name: string;
+  readonly boundaryLabels: readonly string[];
+  /** Every label, boundary labels first, in a fixed order (labels are matched by index). */
+  readonly labels: readonly string[];
+  readonly pieces: readonly Piece[];
+}
+
+/** A piece as a user states it: one shape, allowed orientations, optionally all three rotations. */
+export interface PieceSpec {
+  readonly name?: string;
+  readonly kind?: string;
+  readonly labels: readonly [string, string, string];
+  readonly orientations: readonly Orientation[];
+  readonly rotations?: boolean;
+  readonly weight?: WeightSpec;
+}
+
+export interface PieceSetSpec {
+  readonly name: string;
+  readonly boundaryLabels: readonly string[];
+  readonly pieces: readonly PieceSpec[];
+}
+
+const ONE: WeightSpec = { type: 'integer', value: 1 };
+
+// Which lattice direction each clockwise slot lies on: up (left, right, bottom) = (r, l, h);
+// down (top, right, left) = (h, r, l). Two triangles meet on an edge only along the same direction.
+const SLOT_DIRECTIONS: Record<Orientation, readonly ['h' | 'r' | 'l', 'h' | 'r' | 'l', 'h' | 'r' | 'l']> = {
+  up: ['r', 'l', 'h'],
+  down: ['h', 'r', 'l'],
+};
+
+function rotate(labels: readonly [string, string, string], by: number): [string, string, string] {
+  return [labels[by % 3]!, labels[(by + 1) % 3]!, labels[(by + 2) % 3]!];
+}
+
+/** Expands orientations and rotations, then checks the set; throws `invalid_piece_set` with a JSON path. */
+export function buildPieceSet(spec: PieceSetSpec): PieceSet {
+  checkBoundaryLabels(spec.boundaryLabels);
+  const pieces: Piece[] = [];
+  const seen = new Map<string, string>();
+  spec.pieces.forEach((p, i) => {
+    const name = p.name ?? `piece-${i + 1}`;
+    if (p.orientations.length === 0) {
+      throw new EngineError('invalid_piece_set', `Piece orientations: expected at least one of 'up' | 'down', received none`, `pieces[${i}].orientations`);
+    }
+    for (const orientation of p.orientations) {
+      const turns = p.rotations ? [0, 1, 2] : [0];
+      const variants = new Set(turns.map((t) => rotate(p.labels, t).join('\u0000')));
+      for (const v of variants) {
+        const labels = v.split('\u0000') as [string, string, string];
+        const key = `${orientation}:${v}`;
+        const earlier = seen.get(key);
+        if (earlier !== undefined) {
+          throw new EngineError(
+            'invalid_piece_set',
+            `Duplicate piece: expected each ${orientation} triangle (${labels.join(', ')}) once, received it in '${earlier}' and '${name}'`,
+            `pieces[${i}]`,
+            'remove one of them, or give them different labels',
+          );
+        }
+        seen.set(key, name);
+        pieces.push({ name, kind: p.kind ?? name, orientation, labels, weight: p.weight ?? ONE });
+      }
+    }
+  });
+  const labels = collectLabels(spec.boundaryLabels, pieces);
+  checkMatchable(spec, pieces);
+  return { name: spec.name, boundaryLabels: [...spec.boundaryLabels], labels, pieces };
+}
+
+function checkBoundaryLabels(boundaryLabels: readonly string[]): void {
+  if (boundaryLabels.length === 0) {
+    throw new EngineError('invalid_piece_set', 'Boundary labels: expected at least one label, received none', 'boundaryLabels');
+  }
+  const unique = new Set<string>();
+  boundaryLabels.forEach((l, i) => {
+    if ([...l].length !== 1 || l === ',' || l === '-') {
+      throw new EngineError('invalid_piece_set', `Boundary label: expected a single character other than ',' and '-', received '${l}'`, `boundaryLabels[${i}]`, 'boundary strings are read one character per edge');
+    }
+    if (unique.has(l)) throw new EngineError('invalid_piece_set', `Boundary label: expected distinct labels, received '${l}' twice`, `boundaryLabels[${i}]`);
+    unique.add(l);
+  });
+}
+
+function collectLabels(boundaryLabels: readonly string[], pieces: readonly Piece[]): string[] {
+  const labels = [...boundaryLabels];
+  for (const p of pieces) for (const l of p.labels) if (!labels.includes(l)) labels.push(l);
+  return labels;
+}
+
+// A label on an up triangle's slot must meet the same label on a down triangle along the same
+// direction (or sit on the boundary); otherwise the piece can never be placed.
+function checkMatchable(spec: PieceSetSpec, pieces: readonly Piece[]): void {
+  const present = new Set<string>();
+  for (const p of pieces) p.labels.forEach((l, s) => present.add(`${p.orientation}:${SLOT_DIRECTIONS[p.orientation][s]}:${l}`));
+  const boundary = new Set(spec.boundaryLabels);
+  for (const p of pieces) {
+    p.labels.forEach((l, s) => {
+      const dir = SLOT_DIRECTIONS[p.orientation][s];
+      const other = p.orientation === 'up' ? 'down' : 'up';
+      if (!boundary.has(l) && !present.has(`${other}:${dir}:${l}`)) {
+        const index = spec.pieces.findIndex((q) => (q.name ?? '') === p.name);
+        throw new EngineError(
+          'invalid_piece_set',
+          `Unmatched label: expected some ${other} piece with '${l}' on its ${dir === 'h' ? 'horizontal' : dir === 'r' ? 'up-right' : 'up-left'} edge, received none (piece '${p.name}')`,
+          index >= 0 ? `pieces[${index}].labels` : 'pieces',
+          `'${l}' is not a boundary label, so it must be matched inside; add the matching piece or make '${l}' a boundary label`,
+        );
+      }
+    });
+  }
+}

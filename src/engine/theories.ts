@@ -1,0 +1,56 @@
+import { EngineError } from './engine-error.js';
+import { buildPieceSet, type PieceSet, type PieceSpec } from './piece-set.js';
+
+export const BUILTIN_THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'] as const;
+export type BuiltinTheory = (typeof BUILTIN_THEORIES)[number];
+
+/** Internal label of the horizontal edge inside the equivariant rhombus. */
+export const RHOMBUS_LABEL = 'eq';
+
+const COHOMOLOGY: PieceSpec[] = [
+  { name: '0-triangle', labels: ['0', '0', '0'], orientations: ['up', 'down'] },
+  { name: '1-triangle', labels: ['1', '1', '1'], orientations: ['up', 'down'] },
+  { name: '10-triangle', labels: ['0', '10', '1'], orientations: ['up', 'down'], rotations: true },
+];
+
+// The equivariant rhombus is the up triangle Up(x, y+1) on top of Down(x, y); it is stated as two
+// unit triangles joined by a label of their own. Its weight sits on the lower half; the statistic
+// "equivariant" counts rhombi because only the lower half has that kind.
+const EQUIVARIANT_RHOMBUS: PieceSpec[] = [
+  { name: 'equivariant-upper', kind: 'equivariant-upper', labels: ['0', '1', RHOMBUS_LABEL], orientations: ['up'] },
+  { name: 'equivariant', labels: [RHOMBUS_LABEL, '0', '1'], orientations: ['down'], weight: { type: 'position' } },
+];
+
+const K_UP: PieceSpec = { name: 'k-piece', labels: ['10', '10', '10'], orientations: ['up'], weight: { type: 'integer', value: -1 } };
+const K_DOWN: PieceSpec = { name: 'k-piece', labels: ['10', '10', '10'], orientations: ['down'], weight: { type: 'integer', value: -1 } };
+
+const SPECS: Record<BuiltinTheory, PieceSpec[]> = {
+  cohomology: COHOMOLOGY,
+  equivariant: [...COHOMOLOGY, ...EQUIVARIANT_RHOMBUS],
+  'k-theory': [...COHOMOLOGY, K_UP],
+  'dual-k-theory': [...COHOMOLOGY, K_DOWN],
+};
+
+const cache = new Map<BuiltinTheory, PieceSet>();
+
+export function isBuiltinTheory(name: string): name is BuiltinTheory {
+  return (BUILTIN_THEORIES as readonly string[]).includes(name);
+}
+
+/** The piece set of a built-in theory; throws `unknown_theory` listing the valid names. */
+export function theoryPieceSet(name: string): PieceSet {
+  if (!isBuiltinTheory(name)) {
+    throw new EngineError(
+      'unknown_theory',
+      `Unknown theory: expected one of ${BUILTIN_THEORIES.map((t) => `'${t}'`).join(' | ')}, received '${name}'`,
+      'theory',
+      'or give the path of a custom piece-set JSON file',
+    );
+  }
+  let set = cache.get(name);
+  if (!set) {
+    set = buildPieceSet({ name, boundaryLabels: ['0', '1'], pieces: SPECS[name] });
+    cache.set(name, set);
+  }
+  return set;
+}
