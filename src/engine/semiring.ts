@@ -1,0 +1,17 @@
+/**
+ * The weight ring a count is taken in. `position(i, j)` is the equivariant weight y_j − y_i;
+ * `variable(name)` a named formal variable of a custom piece set.
+ */
+export interface Semiring<T> {
+  readonly name: string;
+  readonly zero: T;
+  readonly one: T;
+  add(a: T, b: T): T;
+  mul(a: T, b: T): T;
+  isZero(a: T): boolean;
+  equals(a: T, b: T): boolean;
+  fromInteger(n: number): T;
+  variable(name: string): T;
+  position(i: number, j: number): T;
+  toText(a: T): string;
+}

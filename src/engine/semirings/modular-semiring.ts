@@ -1,0 +1,94 @@
+import type { Semiring } from '../semiring.js';
+
+/** Residues of one value modulo each prime, at one random evaluation point of the variables. */
+export type Residues = readonly number[];
+
+// Primes below 2^26, so a product of two residues (< 2^52) stays exact in a double.
+function primesBelow(limit: number, count: number): number[] {
+  const found: number[] = [];
+  for (let p = limit - 1; found.length < count; p -= 2) {
+    let prime = p % 2 === 1;
+    for (let d = 3; prime && d * d <= p; d += 2) if (p % d === 0) prime = false;
+    if (prime) found.push(p);
+  }
+  return found;
+}
+
+export const DEFAULT_PRIMES: readonly number[] = primesBelow(2 ** 26, 3);
+
+// A small deterministic generator (mulberry32) so that the same seed evaluates at the same point.
+function generator(seed: number): () => number {
+  let s = seed >>> 0;
+  return () => {
+    s = (s + 0x6d2b79f5) >>> 0;
+    let t = s;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+export interface ModularSemiring extends Semiring<Residues> {
+  readonly primes: readonly number[];
+  readonly seed: number;
+}
+
+/**
+ * Values evaluated at a pseudo-random point modulo several primes: a polynomial identity test.
+ * Equal residues mean equal polynomials except with the probability `modularErrorBound` gives.
+ */
+export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PRIMES): ModularSemiring {
+  const random = generator(seed);
+  const points = new Map<string, Residues>();
+  const point = (name: string): Residues => {
+    let r = points.get(name);
+    if (!r) {
+      r = primes.map((p) => Math.floor(random() * p));
+      points.set(name, r);
+    }
+    return r;
+  };
+  // Draw the y's first, in order, so the point does not depend on which variables a count touches.
+  for (let m = 1; m <= 64; m++) point(`y${m}`);
+  const m = primes.length;
+  const of = (f: (p: number, k: number) => number): Residues => primes.map(f);
+  const zero = of(() => 0);
+  const one = of(() => 1);
+  return {
+    name: 'modular',
+    primes,
+    seed,
+    zero,
+    one,
+    add: (a, b) => of((p, k) => (a[k]! + b[k]!) % p),
+    mul: (a, b) => of((p, k) => (a[k]! * b[k]!) % p),
+    isZero: (a) => a.every((r) => r === 0),
+    equals: (a, b) => {
+      for (let k = 0; k < m; k++) if (a[k] !== b[k]) return false;
+      return true;
+    },
+    fromInteger: (n) => of((p) => ((n % p) + p) % p),
+    variable: (name) => point(`var:${name}`),
+    position: (i, j) => {
+      const yi = point(`y${i}`);
+      const yj = point(`y${j}`);
+      return of((p, k) => (yj[k]! - yi[k]! + p) % p);
+    },
+    toText: (a) => `[${a.map((r, k) => `${r} mod ${primes[k]}`).join(', ')}]`,
+  };
+}
+
+/**
+ * Probability that two different integer polynomials of total degree ≤ `degree` agree at the random
+ * points modulo every prime (Schwartz–Zippel over each F_p, one independent point per prime).
+ * `coefficientBound` bounds the absolute value of every coefficient of their difference: below the
+ * smallest prime, the difference survives modulo each prime and the chances multiply; below the
+ * product of the primes, it survives modulo at least one; beyond that no claim is made (bound 1).
+ */
+export function modularErrorBound(degree: number, coefficientBound: bigint, primes: readonly number[] = DEFAULT_PRIMES): number {
+  const smallest = Math.min(...primes);
+  const product = primes.reduce((acc, p) => acc * BigInt(p), 1n);
+  if (coefficientBound < BigInt(smallest)) return primes.reduce((acc, p) => acc * Math.min(1, degree / p), 1);
+  if (coefficientBound < product) return Math.min(1, degree / smallest);
+  return 1;
+}
