@@ -14,3 +14,5 @@ export * from './semirings/modular-semiring.js';
 export * from './semirings/statistic-semiring.js';
 export * from './weigher.js';
 export * from './transfer-count.js';
+export * from './puzzle-enumeration.js';
+export * from './completion.js';

@@ -1,0 +1,68 @@
+import { readFileSync } from 'node:fs';
+import { buildPieceSet, isBuiltinTheory, theoryPieceSet, type PieceSet, type WeightSpec } from '../engine/index.js';
+import { AppError, toAppError } from '../errors.js';
+import { pieceSetSchema, type PieceSetInput } from './piece-set-schema.js';
+import { fromZodError } from './zod-issue.js';
+
+function toWeight(w: PieceSetInput['pieces'][number]['weight']): WeightSpec | undefined {
+  if (w === undefined) return undefined;
+  if (typeof w === 'number') return { type: 'integer', value: w };
+  if (w === 'position') return { type: 'position' };
+  return { type: 'variable', name: w.variable };
+}
+
+/** Builds a custom piece set from parsed JSON; errors carry the JSON path inside `file`. */
+export function pieceSetFromJson(data: unknown, file?: string, prefix = ''): PieceSet {
+  const parsed = pieceSetSchema.safeParse(data);
+  if (!parsed.success) throw fromZodError(parsed.error, 'invalid_piece_set', data, file, prefix);
+  const spec = parsed.data;
+  try {
+    return buildPieceSet({
+      name: spec.name,
+      boundaryLabels: spec.boundaryLabels,
+      pieces: spec.pieces.map((p) => ({
+        labels: p.labels,
+        orientations: p.orientations,
+        ...(p.name !== undefined ? { name: p.name } : {}),
+        ...(p.kind !== undefined ? { kind: p.kind } : {}),
+        ...(p.rotations !== undefined ? { rotations: p.rotations } : {}),
+        ...(toWeight(p.weight) ? { weight: toWeight(p.weight)! } : {}),
+      })),
+    });
+  } catch (e) {
+    throw toAppError(e, prefix, file);
+  }
+}
+
+/** Reads and parses a JSON file with coded errors for a missing file or bad JSON. */
+export function readJsonFile(file: string, what: string): unknown {
+  let text: string;
+  try {
+    text = readFileSync(file, 'utf8');
+  } catch {
+    throw new AppError('file_not_found', `${what}: expected a readable file, received '${file}'`, { path: file, hint: 'check the path' });
+  }
+  try {
+    return JSON.parse(text) as unknown;
+  } catch (e) {
+    throw new AppError('invalid_json', `${what}: expected valid JSON, received ${(e as Error).message}`, { file });
+  }
+}
+
+/** A built-in theory name, or the path of a custom piece-set JSON file. */
+export function resolveTheory(nameOrPath: string): PieceSet {
+  if (isBuiltinTheory(nameOrPath)) return theoryPieceSet(nameOrPath);
+  if (!/[./\\]/.test(nameOrPath)) {
+    try {
+      return theoryPieceSet(nameOrPath);
+    } catch (e) {
+      throw toAppError(e, '--theory');
+    }
+  }
+  return pieceSetFromJson(readJsonFile(nameOrPath, 'Piece-set file'), nameOrPath);
+}
+
+/** True when every piece weighs an integer, so values are integers rather than polynomials. */
+export function hasIntegerWeights(pieces: PieceSet): boolean {
+  return pieces.pieces.every((p) => p.weight.type === 'integer');
+}

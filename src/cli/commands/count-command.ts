@@ -1,0 +1,45 @@
+import type { CommandModule } from 'yargs';
+import { resolveTheory } from '../../claims/resolve-theory.js';
+import { countJson, valueText } from '../../report/value-json.js';
+import { countRegion } from '../../run/count-region.js';
+import { parseBoundaryArgs } from '../boundary-args.js';
+import { runCommand } from '../run-command.js';
+
+interface CountArgs {
+  theory: string;
+  triangle?: string;
+  sides?: string;
+  completed: boolean;
+  json: boolean;
+}
+
+export const countCommand: CommandModule<object, CountArgs> = {
+  command: 'count',
+  describe: 'Print the value of one boundary (the sum over its puzzles of the product of piece weights)',
+  builder: (y) =>
+    y
+      .option('theory', { type: 'string', demandOption: true, describe: "cohomology | equivariant | k-theory | dual-k-theory | path to a piece-set JSON" })
+      .option('triangle', { type: 'string', describe: 'λ,μ,ν on the upright triangle: λ up the NW side, μ down the NE side, ν along the bottom' })
+      .option('sides', { type: 'string', describe: "six clockwise side strings s1,…,s6; an empty side is '' or '-'" })
+      .option('completed', { type: 'boolean', default: false, describe: 'count the completed triangle instead of the region itself' })
+      .option('json', { type: 'boolean', default: false, describe: 'print one JSON object' }) as never,
+  handler: (args) =>
+    runCommand(args.json, () => {
+      const pieces = resolveTheory(args.theory);
+      const result = countRegion(pieces, parseBoundaryArgs(args), { completed: args.completed });
+      if (args.json) {
+        process.stdout.write(`${JSON.stringify(countJson(result))}\n`);
+        return;
+      }
+      const counted = result.completion ?? result;
+      const lines = [
+        `theory:  ${result.theory}`,
+        `region:  ${result.region.lengths.join(',')} (completed triangle N = ${result.region.size})`,
+        `sides:   ${result.sides.map((s) => s || '-').join(' | ')}`,
+        ...(result.completion ? [`counted: completed triangle, sides ${counted.sides.map((s) => s || '-').join(' | ')}`] : []),
+        `puzzles: ${result.puzzles}`,
+        `value:   ${valueText(result.value)}`,
+      ];
+      process.stdout.write(`${lines.join('\n')}\n`);
+    }),
+};

@@ -1,0 +1,19 @@
+#!/usr/bin/env node
+import yargs from 'yargs';
+import { hideBin } from 'yargs/helpers';
+import { countCommand } from './commands/count-command.js';
+import { showCommand } from './commands/show-command.js';
+
+await yargs(hideBin(process.argv))
+  .scriptName('puzzlesweep')
+  .command(countCommand)
+  .command(showCommand)
+  .demandCommand(1, 'Command: expected one of the commands listed above, received none')
+  .strict()
+  .fail((msg, err, y) => {
+    if (err) throw err;
+    process.stderr.write(`✖ ${msg}\n  Hint: run 'puzzlesweep --help'\n  [invalid_argument]\n`);
+    process.exit(2);
+  })
+  .help()
+  .parseAsync();

@@ -1,0 +1,15 @@
+import { AppError, errorJson, exitCodeFor, formatError, toAppError } from '../errors.js';
+
+/** Runs a command body; coded errors are printed at this edge and become the exit status. */
+export async function runCommand(json: boolean | undefined, body: () => Promise<number | void> | number | void): Promise<void> {
+  try {
+    const code = await body();
+    if (typeof code === 'number') process.exitCode = code;
+  } catch (e) {
+    const err: AppError = toAppError(e);
+    if (json) process.stdout.write(`${JSON.stringify(errorJson(err))}\n`);
+    process.stderr.write(`${formatError(err)}\n`);
+    if (err.code === 'internal_error' && err.cause instanceof Error && process.env.PUZZLESWEEP_DEBUG) process.stderr.write(`${err.cause.stack}\n`);
+    process.exitCode = exitCodeFor(err);
+  }
+}

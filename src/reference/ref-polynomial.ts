@@ -1,0 +1,263 @@
+import { ReferenceComputationError } from './reference-error.js';
+
+/** One term of a polynomial: an integer coefficient times y^exponents (variable i has index i). */
+export interface PolynomialTerm {
+  coefficient: bigint;
+  exponents: number[];
+}
+
+interface Monomial {
+  readonly exps: readonly number[]; // trailing zeros trimmed, so equal monomials have equal keys
+  readonly coeff: bigint;
+}
+
+function trim(exps: readonly number[]): number[] {
+  let end = exps.length;
+  while (end > 0 && exps[end - 1] === 0) end--;
+  return exps.slice(0, end);
+}
+
+function lexCompare(a: readonly number[], b: readonly number[]): number {
+  const len = Math.max(a.length, b.length);
+  for (let i = 0; i < len; i++) {
+    const d = (a[i] ?? 0) - (b[i] ?? 0);
+    if (d !== 0) return d;
+  }
+  return 0;
+}
+
+/** An exact sparse multivariate polynomial over ℤ; immutable, variables indexed 0, 1, 2, …. */
+export class RefPolynomial {
+  private readonly terms: ReadonlyMap<string, Monomial>;
+
+  private constructor(terms: ReadonlyMap<string, Monomial>) {
+    this.terms = terms;
+  }
+
+  /** The zero polynomial. */
+  static zero(): RefPolynomial {
+    return new RefPolynomial(new Map());
+  }
+
+  /** A constant polynomial. */
+  static constant(c: bigint | number): RefPolynomial {
+    return RefPolynomial.monomial(BigInt(c), []);
+  }
+
+  /** The variable with index i (y_{i+1} in the Schubert-calculus convention). */
+  static variable(i: number): RefPolynomial {
+    if (!Number.isInteger(i) || i < 0) {
+      throw new ReferenceComputationError('invalid_argument', `Variable index: expected a non-negative integer, received ${i}`);
+    }
+    const exps = new Array<number>(i + 1).fill(0);
+    exps[i] = 1;
+    return RefPolynomial.monomial(1n, exps);
+  }
+
+  /** c·y^exps. */
+  static monomial(c: bigint, exps: readonly number[]): RefPolynomial {
+    for (const e of exps) {
+      if (!Number.isInteger(e) || e < 0) {
+        throw new ReferenceComputationError('invalid_argument', `Exponent: expected a non-negative integer, received ${e}`);
+      }
+    }
+    const m = new Map<string, Monomial>();
+    if (c !== 0n) {
+      const t = trim(exps);
+      m.set(t.join(','), { exps: t, coeff: c });
+    }
+    return new RefPolynomial(m);
+  }
+
+  /** y_b − y_a for variable indices a, b (a linear form used for roots). */
+  static difference(b: number, a: number): RefPolynomial {
+    return RefPolynomial.variable(b).sub(RefPolynomial.variable(a));
+  }
+
+  /** Builds a polynomial from a term list (repeated monomials are summed). */
+  static fromTerms(terms: readonly PolynomialTerm[]): RefPolynomial {
+    let acc = new Map<string, Monomial>();
+    for (const t of terms) acc = addInto(acc, RefPolynomial.monomial(t.coefficient, t.exponents).terms, 1n);
+    return new RefPolynomial(acc);
+  }
+
+  isZero(): boolean {
+    return this.terms.size === 0;
+  }
+
+  /** Number of nonzero terms. */
+  get size(): number {
+    return this.terms.size;
+  }
+
+  add(other: RefPolynomial): RefPolynomial {
+    return new RefPolynomial(addInto(new Map(this.terms), other.terms, 1n));
+  }
+
+  sub(other: RefPolynomial): RefPolynomial {
+    return new RefPolynomial(addInto(new Map(this.terms), other.terms, -1n));
+  }
+
+  neg(): RefPolynomial {
+    return this.scale(-1n);
+  }
+
+  scale(c: bigint): RefPolynomial {
+    if (c === 0n) return RefPolynomial.zero();
+    const m = new Map<string, Monomial>();
+    for (const [k, t] of this.terms) m.set(k, { exps: t.exps, coeff: t.coeff * c });
+    return new RefPolynomial(m);
+  }
+
+  mul(other: RefPolynomial): RefPolynomial {
+    const m = new Map<string, Monomial>();
+    for (const a of this.terms.values()) {
+      for (const b of other.terms.values()) {
+        const len = Math.max(a.exps.length, b.exps.length);
+        const exps = new Array<number>(len);
+        for (let i = 0; i < len; i++) exps[i] = (a.exps[i] ?? 0) + (b.exps[i] ?? 0);
+        const key = exps.join(',');
+        const prev = m.get(key);
+        const c = (prev?.coeff ?? 0n) + a.coeff * b.coeff;
+        if (c === 0n) m.delete(key);
+        else m.set(key, { exps, coeff: c });
+      }
+    }
+    return new RefPolynomial(m);
+  }
+
+  /** Exact quotient this / divisor; throws `inexact_division` when the divisor does not divide. */
+  divExact(divisor: RefPolynomial): RefPolynomial {
+    if (divisor.isZero()) {
+      throw new ReferenceComputationError('inexact_division', 'Polynomial divisor: expected a nonzero polynomial, received 0');
+    }
+    // Lex order is a monomial order, so if d | r then LT(d) | LT(r); peeling leading terms must end at 0.
+    const lead = divisor.leadingTerm();
+    let remainder: RefPolynomial = this;
+    let quotient = RefPolynomial.zero();
+    while (!remainder.isZero()) {
+      const r = remainder.leadingTerm();
+      const len = Math.max(r.exps.length, lead.exps.length);
+      const exps: number[] = [];
+      for (let i = 0; i < len; i++) exps.push((r.exps[i] ?? 0) - (lead.exps[i] ?? 0));
+      if (exps.some((e) => e < 0) || r.coeff % lead.coeff !== 0n) {
+        throw new ReferenceComputationError(
+          'inexact_division',
+          `Polynomial division: expected a divisor of the dividend, received a remainder with leading term ${r.coeff}·y^[${r.exps.join(',')}]`,
+        );
+      }
+      const q = RefPolynomial.monomial(r.coeff / lead.coeff, exps);
+      quotient = quotient.add(q);
+      remainder = remainder.sub(q.mul(divisor));
+    }
+    return quotient;
+  }
+
+  equals(other: RefPolynomial): boolean {
+    if (this.terms.size !== other.terms.size) return false;
+    for (const [k, t] of this.terms) if (other.terms.get(k)?.coeff !== t.coeff) return false;
+    return true;
+  }
+
+  /** Total degree (−1 for the zero polynomial). */
+  degree(): number {
+    let d = -1;
+    for (const t of this.terms.values()) d = Math.max(d, t.exps.reduce((s, e) => s + e, 0));
+    return d;
+  }
+
+  /** True when every term has the same total degree (the zero polynomial counts as homogeneous). */
+  isHomogeneous(): boolean {
+    const degs = new Set<number>();
+    for (const t of this.terms.values()) degs.add(t.exps.reduce((s, e) => s + e, 0));
+    return degs.size <= 1;
+  }
+
+  /** Coefficient of the constant term, i.e. the value at y = 0. */
+  constantTerm(): bigint {
+    return this.terms.get('')?.coeff ?? 0n;
+  }
+
+  /** Number of variables actually used: one more than the largest index with a nonzero exponent. */
+  variableCount(): number {
+    let v = 0;
+    for (const t of this.terms.values()) v = Math.max(v, t.exps.length);
+    return v;
+  }
+
+  /** Substitutes images[i] for variable i (variables without an image stay themselves). */
+  substitute(images: readonly RefPolynomial[]): RefPolynomial {
+    let acc = RefPolynomial.zero();
+    for (const t of this.terms.values()) {
+      let term = RefPolynomial.constant(t.coeff);
+      t.exps.forEach((e, i) => {
+        const img = images[i] ?? RefPolynomial.variable(i);
+        for (let j = 0; j < e; j++) term = term.mul(img);
+      });
+      acc = acc.add(term);
+    }
+    return acc;
+  }
+
+  /** Renames variable i to perm[i] (used for the Weyl group action on roots and classes). */
+  permuteVariables(perm: readonly number[]): RefPolynomial {
+    const m = new Map<string, Monomial>();
+    for (const t of this.terms.values()) {
+      const exps: number[] = [];
+      t.exps.forEach((e, i) => {
+        const j = perm[i] ?? i;
+        while (exps.length <= j) exps.push(0);
+        exps[j] = (exps[j] ?? 0) + e;
+      });
+      const tr = trim(exps);
+      m.set(tr.join(','), { exps: tr, coeff: t.coeff });
+    }
+    return new RefPolynomial(m);
+  }
+
+  /** Raw terms (exponent vectors trimmed of trailing zeros), in no particular order. */
+  rawTerms(): Array<{ coeff: bigint; exps: readonly number[] }> {
+    return [...this.terms.values()].map((t) => ({ coeff: t.coeff, exps: t.exps }));
+  }
+
+  private leadingTerm(): Monomial {
+    let best: Monomial | undefined;
+    for (const t of this.terms.values()) if (best === undefined || lexCompare(t.exps, best.exps) > 0) best = t;
+    if (best === undefined) throw new ReferenceComputationError('invalid_argument', 'Leading term: expected a nonzero polynomial, received 0');
+    return best;
+  }
+
+  toString(): string {
+    const ts = toTerms(this, this.variableCount());
+    if (ts.length === 0) return '0';
+    return ts
+      .map((t) => `${t.coefficient}` + t.exponents.map((e, i) => (e === 0 ? '' : `*y${i + 1}^${e}`)).join(''))
+      .join(' + ');
+  }
+}
+
+function addInto(acc: Map<string, Monomial>, other: ReadonlyMap<string, Monomial>, sign: bigint): Map<string, Monomial> {
+  for (const [k, t] of other) {
+    const c = (acc.get(k)?.coeff ?? 0n) + sign * t.coeff;
+    if (c === 0n) acc.delete(k);
+    else acc.set(k, { exps: t.exps, coeff: c });
+  }
+  return acc;
+}
+
+/** Terms of p with exponent vectors of length nvars, zero terms removed, sorted lexicographically ascending by exponent vector. */
+export function toTerms(p: RefPolynomial, nvars: number): PolynomialTerm[] {
+  if (!Number.isInteger(nvars) || nvars < 0) {
+    throw new ReferenceComputationError('invalid_argument', `Variable count: expected a non-negative integer, received ${nvars}`);
+  }
+  const used = p.variableCount();
+  if (used > nvars) {
+    throw new ReferenceComputationError('invalid_argument', `Variable count: expected at least ${used}, received ${nvars}`);
+  }
+  const out = p.rawTerms().map((t) => {
+    const exponents = new Array<number>(nvars).fill(0);
+    t.exps.forEach((e, i) => (exponents[i] = e));
+    return { coefficient: t.coeff, exponents };
+  });
+  return out.sort((a, b) => lexCompare(a.exponents, b.exponents));
+}

@@ -1,0 +1,57 @@
+import {
+  completeToTriangle,
+  countBoundary,
+  fillingCountSemiring,
+  integerSemiring,
+  makeRegion,
+  polynomialSemiring,
+  type PieceSet,
+  type Polynomial,
+  type Region,
+  type SafeInt,
+} from '../engine/index.js';
+import { toAppError } from '../errors.js';
+import { hasIntegerWeights } from '../claims/resolve-theory.js';
+
+export type RegionValue =
+  | { readonly type: 'integer'; readonly value: SafeInt }
+  | { readonly type: 'polynomial'; readonly value: Polynomial; readonly size: number; readonly variableNames: readonly string[] };
+
+export interface CountResult {
+  readonly theory: string;
+  readonly region: Region;
+  readonly sides: readonly string[];
+  /** Present with `completed`: the triangle actually counted. */
+  readonly completion?: { readonly region: Region; readonly sides: readonly string[] };
+  readonly puzzles: SafeInt;
+  readonly value: RegionValue;
+}
+
+/** Side lengths from six clockwise strings, validated as a region. */
+export function regionOfSides(sides: readonly string[]): Region {
+  try {
+    return makeRegion(sides.map((s) => [...s].length));
+  } catch (e) {
+    throw toAppError(e, '--sides');
+  }
+}
+
+/** The exact value and the number of fillings of one boundary, or of its completed triangle. */
+export function countRegion(pieces: PieceSet, sides: readonly string[], options: { completed?: boolean } = {}): CountResult {
+  try {
+    const region = regionOfSides(sides);
+    const completion = options.completed ? completeToTriangle(region, sides, pieces) : undefined;
+    const target = completion ?? { region, sides };
+    const puzzles = countBoundary(target.region, target.sides, pieces, { semiring: fillingCountSemiring });
+    let value: RegionValue;
+    if (hasIntegerWeights(pieces)) {
+      value = { type: 'integer', value: countBoundary(target.region, target.sides, pieces, { semiring: integerSemiring }) };
+    } else {
+      const ring = polynomialSemiring(target.region.size);
+      value = { type: 'polynomial', value: countBoundary(target.region, target.sides, pieces, { semiring: ring }), size: ring.size, variableNames: ring.variableNames };
+    }
+    return { theory: pieces.name, region, sides, ...(completion ? { completion } : {}), puzzles, value };
+  } catch (e) {
+    throw toAppError(e, '--sides');
+  }
+}
