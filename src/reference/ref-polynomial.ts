@@ -133,10 +133,11 @@ export class RefPolynomial {
     }
     // Lex order is a monomial order, so if d | r then LT(d) | LT(r); peeling leading terms must end at 0.
     const lead = divisor.leadingTerm();
-    let remainder: RefPolynomial = this;
-    let quotient = RefPolynomial.zero();
-    while (!remainder.isZero()) {
-      const r = remainder.leadingTerm();
+    const rest = [...divisor.terms.values()].filter((t) => t !== lead);
+    const remainder = new Map(this.terms);
+    const quotient = new Map<string, Monomial>();
+    while (remainder.size > 0) {
+      const r = leadingOf(remainder.values());
       const len = Math.max(r.exps.length, lead.exps.length);
       const exps: number[] = [];
       for (let i = 0; i < len; i++) exps.push((r.exps[i] ?? 0) - (lead.exps[i] ?? 0));
@@ -146,11 +147,22 @@ export class RefPolynomial {
           `Polynomial division: expected a divisor of the dividend, received a remainder with leading term ${r.coeff}·y^[${r.exps.join(',')}]`,
         );
       }
-      const q = RefPolynomial.monomial(r.coeff / lead.coeff, exps);
-      quotient = quotient.add(q);
-      remainder = remainder.sub(q.mul(divisor));
+      const qc = r.coeff / lead.coeff;
+      const qexps = trim(exps);
+      quotient.set(qexps.join(','), { exps: qexps, coeff: qc });
+      // Subtract q·divisor in place: the leading product cancels r exactly, the rest is accumulated.
+      remainder.delete(r.exps.join(','));
+      for (const t of rest) {
+        const plen = Math.max(qexps.length, t.exps.length);
+        const pe = new Array<number>(plen);
+        for (let i = 0; i < plen; i++) pe[i] = (qexps[i] ?? 0) + (t.exps[i] ?? 0);
+        const key = pe.join(',');
+        const c = (remainder.get(key)?.coeff ?? 0n) - qc * t.coeff;
+        if (c === 0n) remainder.delete(key);
+        else remainder.set(key, { exps: pe, coeff: c });
+      }
     }
-    return quotient;
+    return new RefPolynomial(quotient);
   }
 
   equals(other: RefPolynomial): boolean {
@@ -221,10 +233,7 @@ export class RefPolynomial {
   }
 
   private leadingTerm(): Monomial {
-    let best: Monomial | undefined;
-    for (const t of this.terms.values()) if (best === undefined || lexCompare(t.exps, best.exps) > 0) best = t;
-    if (best === undefined) throw new ReferenceComputationError('invalid_argument', 'Leading term: expected a nonzero polynomial, received 0');
-    return best;
+    return leadingOf(this.terms.values());
   }
 
   toString(): string {
@@ -234,6 +243,13 @@ export class RefPolynomial {
       .map((t) => `${t.coefficient}` + t.exponents.map((e, i) => (e === 0 ? '' : `*y${i + 1}^${e}`)).join(''))
       .join(' + ');
   }
+}
+
+function leadingOf(terms: Iterable<Monomial>): Monomial {
+  let best: Monomial | undefined;
+  for (const t of terms) if (best === undefined || lexCompare(t.exps, best.exps) > 0) best = t;
+  if (best === undefined) throw new ReferenceComputationError('invalid_argument', 'Leading term: expected a nonzero polynomial, received 0');
+  return best;
 }
 
 function addInto(acc: Map<string, Monomial>, other: ReadonlyMap<string, Monomial>, sign: bigint): Map<string, Monomial> {

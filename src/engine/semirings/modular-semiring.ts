@@ -37,7 +37,7 @@ export interface ModularSemiring extends Semiring<Residues> {
  * Values evaluated at a pseudo-random point modulo several primes: a polynomial identity test.
  * Equal residues mean equal polynomials except with the probability `modularErrorBound` gives.
  */
-export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PRIMES): ModularSemiring {
+export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PRIMES, substitution?: (m: number) => number): ModularSemiring {
   const random = generator(seed);
   const points = new Map<string, Residues>();
   const point = (name: string): Residues => {
@@ -49,7 +49,7 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
     return r;
   };
   // Draw the y's first, in order, so the point does not depend on which variables a count touches.
-  for (let m = 1; m <= 64; m++) point(`y${m}`);
+  for (let m = 1; m <= 256; m++) point(`y${m}`);
   const m = primes.length;
   const of = (f: (p: number, k: number) => number): Residues => primes.map(f);
   const zero = of(() => 0);
@@ -69,9 +69,10 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
     },
     fromInteger: (n) => of((p) => ((n % p) + p) % p),
     variable: (name) => point(`var:${name}`),
+    // With a substitution y_m ↦ y_σ(m), the value is that of the substituted polynomial at the same point.
     position: (i, j) => {
-      const yi = point(`y${i}`);
-      const yj = point(`y${j}`);
+      const yi = point(`y${substitution ? substitution(i) : i}`);
+      const yj = point(`y${substitution ? substitution(j) : j}`);
       return of((p, k) => (yj[k]! - yi[k]! + p) % p);
     },
     toText: (a) => `[${a.map((r, k) => `${r} mod ${primes[k]}`).join(', ')}]`,

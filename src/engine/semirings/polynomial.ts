@@ -121,3 +121,18 @@ export function polyText(a: Polynomial, names: (k: number) => string): string {
 function degreeOf(e: readonly number[]): number {
   return e.reduce((s, x) => s + x, 0);
 }
+
+/** Renames variables: variable k becomes variable `rename(k)` (e.g. a substitution y_m ↦ y_σ(m)). */
+export function substitutePoly(a: Polynomial, rename: (k: number) => number): Polynomial {
+  const acc = new Map<string, bigint>();
+  for (const [key, c] of a) {
+    const e: number[] = [];
+    for (let k = 0; k < key.length; k++) {
+      const to = rename(k);
+      while (e.length <= to) e.push(0);
+      e[to]! += key.charCodeAt(k);
+    }
+    addInto(acc, monomialKey(e), c);
+  }
+  return acc;
+}
