@@ -11,6 +11,12 @@ interface Monomial {
   readonly coeff: bigint;
 }
 
+// Exponents are small, so one UTF-16 unit per variable makes a compact, fast map key. A product of
+// trimmed vectors is trimmed too, so keys of equal monomials always agree.
+function keyOf(exps: readonly number[]): string {
+  return String.fromCharCode(...exps);
+}
+
 function trim(exps: readonly number[]): number[] {
   let end = exps.length;
   while (end > 0 && exps[end - 1] === 0) end--;
@@ -64,7 +70,7 @@ export class RefPolynomial {
     const m = new Map<string, Monomial>();
     if (c !== 0n) {
       const t = trim(exps);
-      m.set(t.join(','), { exps: t, coeff: c });
+      m.set(keyOf(t), { exps: t, coeff: c });
     }
     return new RefPolynomial(m);
   }
@@ -116,7 +122,7 @@ export class RefPolynomial {
         const len = Math.max(a.exps.length, b.exps.length);
         const exps = new Array<number>(len);
         for (let i = 0; i < len; i++) exps[i] = (a.exps[i] ?? 0) + (b.exps[i] ?? 0);
-        const key = exps.join(',');
+        const key = keyOf(exps);
         const prev = m.get(key);
         const c = (prev?.coeff ?? 0n) + a.coeff * b.coeff;
         if (c === 0n) m.delete(key);
@@ -149,14 +155,14 @@ export class RefPolynomial {
       }
       const qc = r.coeff / lead.coeff;
       const qexps = trim(exps);
-      quotient.set(qexps.join(','), { exps: qexps, coeff: qc });
+      quotient.set(keyOf(qexps), { exps: qexps, coeff: qc });
       // Subtract q·divisor in place: the leading product cancels r exactly, the rest is accumulated.
-      remainder.delete(r.exps.join(','));
+      remainder.delete(keyOf(r.exps));
       for (const t of rest) {
         const plen = Math.max(qexps.length, t.exps.length);
         const pe = new Array<number>(plen);
         for (let i = 0; i < plen; i++) pe[i] = (qexps[i] ?? 0) + (t.exps[i] ?? 0);
-        const key = pe.join(',');
+        const key = keyOf(pe);
         const c = (remainder.get(key)?.coeff ?? 0n) - qc * t.coeff;
         if (c === 0n) remainder.delete(key);
         else remainder.set(key, { exps: pe, coeff: c });
@@ -222,7 +228,7 @@ export class RefPolynomial {
         exps[j] = (exps[j] ?? 0) + e;
       });
       const tr = trim(exps);
-      m.set(tr.join(','), { exps: tr, coeff: t.coeff });
+      m.set(keyOf(tr), { exps: tr, coeff: t.coeff });
     }
     return new RefPolynomial(m);
   }

@@ -1,0 +1,68 @@
+/**
+ * The contract between the claims layer (what a claim means) and the sweep runner (how it is swept).
+ * The runner only ever sees these types; everything mathematical stays behind `planClaim`.
+ */
+
+/** One side-length class of a family: the family's variables fixed to values. */
+export interface SizeClass {
+  /** Stable name, e.g. `a=2,b=1` (variables in the order the claim declares them). */
+  readonly key: string;
+  readonly variables: Readonly<Record<string, number>>;
+  readonly lengths: readonly [number, number, number, number, number, number];
+  /** Total boundary length s1+…+s6 (classes are swept in increasing size, then lengths). */
+  readonly size: number;
+}
+
+/** One boundary of a class, named by its index inside the class (0 ≤ index < instanceCount). */
+export interface Instance {
+  readonly classKey: string;
+  readonly index: bigint;
+  /** Six clockwise side strings. */
+  readonly sides: readonly string[];
+}
+
+/** A measured value in printable and stable-JSON form. */
+export interface Measured {
+  readonly theory: string;
+  readonly lengths: readonly number[];
+  readonly sides: readonly string[];
+  /** Canonical text: a decimal, a polynomial such as `y3 - y2`, a distribution `1 + 2*t`, or residues. */
+  readonly text: string;
+  readonly json: unknown;
+}
+
+export interface InstanceResult {
+  readonly classKey: string;
+  readonly index: bigint;
+  /** `paired`: the transform is an involution and this boundary's partner (lower index) stands for it. */
+  readonly status: 'holds' | 'fails' | 'skipped_zero' | 'paired';
+  readonly left: Measured;
+  readonly right: Measured;
+  /** For "equal up to some permutation": the permutation found (1-based images of y_1..y_N). */
+  readonly permutation?: readonly number[];
+  /** `modular`: values compared by evaluation modulo primes; `errorBound` is the chance of a false "holds". */
+  readonly method: 'exact' | 'modular';
+  readonly errorBound?: number;
+}
+
+/** Options that change what a sweep checks (they are part of the fingerprint when they change results). */
+export interface EvaluateOptions {
+  /** Exact polynomials instead of modular identity tests. */
+  readonly exact: boolean;
+}
+
+export interface ClaimPlan {
+  /** Side-length classes in sweep order, with variable upper bounds optionally raised or lowered. */
+  classes(maxOverride?: Readonly<Record<string, number>>): SizeClass[];
+  instanceCount(cls: SizeClass): bigint;
+  /** The index ↔ instance bijection inside a class; consecutive indices share sides 1–4 and 6 where possible. */
+  instanceAt(cls: SizeClass, index: bigint): Instance;
+  indexOf(cls: SizeClass, sides: readonly string[]): bigint | undefined;
+}
+
+export interface Evaluator {
+  /** Checks one instance; may use a cache of one-pass-for-all-completions sweeps keyed by partial boundary. */
+  evaluate(instance: Instance): InstanceResult;
+  /** Recomputes one instance with exact arithmetic only (used to confirm every counterexample). */
+  confirm(instance: Instance): InstanceResult;
+}
