@@ -3,6 +3,7 @@ import type { PieceSet } from './piece-set.js';
 import type { Region } from './region.js';
 import type { Semiring } from './semiring.js';
 import { compilePlan, expandStep, type TransferPlan } from './transfer-plan.js';
+import { fitsNumeric, sweepNumeric, type WeightTable } from './transfer-numeric.js';
 import { declaredWeigher, type Weigher } from './weigher.js';
 
 export interface CountOptions<T> {
@@ -12,7 +13,7 @@ export interface CountOptions<T> {
 }
 
 // Weight of each piece on the triangle of each step, looked up once per sweep, with a flag for 1.
-function weightTable<T>(plan: TransferPlan, semiring: Semiring<T>, weigher: Weigher<T>): ({ w: T; isOne: boolean } | undefined)[][] {
+function weightTable<T>(plan: TransferPlan, semiring: Semiring<T>, weigher: Weigher<T>): WeightTable<T> {
   return plan.steps.map((step) => {
     if (step.type !== 'up' && step.type !== 'down') return [];
     return plan.pieces.pieces.map((p) => {
@@ -23,10 +24,11 @@ function weightTable<T>(plan: TransferPlan, semiring: Semiring<T>, weigher: Weig
   });
 }
 
-/** Runs the sweep and returns the final profiles (line 0, left to right) with their values. */
+/** Runs the sweep (packed numeric profiles when they fit, strings otherwise) and returns the final profiles (line 0, left to right) with their values. */
 export function sweep<T>(plan: TransferPlan, options: CountOptions<T>): Map<string, T> {
   const { semiring } = options;
   const weights = weightTable(plan, semiring, options.weigher ?? declaredWeigher(semiring));
+  if (fitsNumeric(plan)) return sweepNumeric(plan, semiring, weights);
   let state = new Map<string, T>([[plan.initial, semiring.one]]);
   plan.steps.forEach((step, s) => {
     const next = new Map<string, T>();

@@ -60,9 +60,24 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
     seed,
     zero,
     one,
-    add: (a, b) => of((p, k) => (a[k]! + b[k]!) % p),
-    mul: (a, b) => of((p, k) => (a[k]! * b[k]!) % p),
-    isZero: (a) => a.every((r) => r === 0),
+    // Plain loops: these run once per transition of a sweep, so no closures or intermediate arrays.
+    add: (a, b) => {
+      const r = new Array<number>(m);
+      for (let k = 0; k < m; k++) {
+        const s = a[k]! + b[k]!;
+        r[k] = s >= primes[k]! ? s - primes[k]! : s;
+      }
+      return r;
+    },
+    mul: (a, b) => {
+      const r = new Array<number>(m);
+      for (let k = 0; k < m; k++) r[k] = (a[k]! * b[k]!) % primes[k]!;
+      return r;
+    },
+    isZero: (a) => {
+      for (let k = 0; k < m; k++) if (a[k] !== 0) return false;
+      return true;
+    },
     equals: (a, b) => {
       for (let k = 0; k < m; k++) if (a[k] !== b[k]) return false;
       return true;
