@@ -34,7 +34,16 @@ export function makeRegion(lengths: readonly number[]): Region {
       'a hexagon closes iff opposite "gaps" agree, e.g. triangle n,0,n,0,n,0 or parallelogram a,b,0,a,b,0',
     );
   }
-  return { lengths: [s1, s2, s3, s4, s5, s6], size: s6 + s1 + s2 };
+  const region: Region = { lengths: [s1, s2, s3, s4, s5, s6], size: s6 + s1 + s2 };
+  if (unitTriangleCount(region) === 0) {
+    throw new EngineError(
+      'invalid_region',
+      `Region: expected a region with at least one unit triangle, received side lengths ${lengths.join(',')} (a flat segment)`,
+      'lengths',
+      'let the family variables start at values that give the region some area',
+    );
+  }
+  return region;
 }
 
 /** The upright triangle of side n. */

@@ -106,7 +106,11 @@ export function polyDegree(a: Polynomial): number {
 /** Readable text such as `-y1 + y2` or `2*y1*y3^2 - q`; `names[k]` names variable k. */
 export function polyText(a: Polynomial, names: (k: number) => string): string {
   if (a.size === 0) return '0';
-  const terms = polyTerms(a, 0).sort((s, t) => degreeOf(t.exponents) - degreeOf(s.exponents) || compareExponents(s.exponents, t.exponents));
+  // Highest degree first; within a degree positive terms first, each group in lex order (y1 before y2).
+  const positive = (t: Term) => (t.coefficient > 0n ? 0 : 1);
+  const terms = polyTerms(a, 0).sort(
+    (s, t) => degreeOf(t.exponents) - degreeOf(s.exponents) || positive(s) - positive(t) || compareExponents(t.exponents, s.exponents),
+  );
   return terms
     .map((t, idx) => {
       const vars = t.exponents.flatMap((e, k) => (e === 0 ? [] : [e === 1 ? names(k) : `${names(k)}^${e}`]));
