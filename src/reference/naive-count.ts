@@ -1,0 +1,159 @@
+import { RefPolynomial } from './ref-polynomial.js';
+import { ReferenceComputationError } from './reference-error.js';
+
+/** Weight of a piece: an integer, a named variable, or the position weight y_j − y_i of its place. */
+export type NaivePieceWeight =
+  | { type: 'integer'; value: number }
+  | { type: 'variable'; name: string }
+  | { type: 'position' };
+
+/** A unit-triangle piece, labels clockwise: up = (left, right, bottom), down = (top, right, left). */
+export interface NaivePiece {
+  orientation: 'up' | 'down';
+  labels: [string, string, string];
+  weight: NaivePieceWeight;
+}
+
+/** Result of a naive count: the number of fillings and Σ over fillings of the product of piece weights. */
+export interface NaiveCountResult {
+  fillings: bigint;
+  value: RefPolynomial;
+  /** Names of the named-weight variables, in order; name i is polynomial variable N + i (N = completed side). */
+  variableNames: string[];
+}
+
+// Edges in completed-triangle coordinates: 'h' (x,y)–(x+1,y), 'r' (x,y)–(x,y+1), 'l' (x+1,y)–(x,y+1).
+const edge = (dir: 'h' | 'r' | 'l', x: number, y: number): string => `${dir}${x},${y}`;
+
+function triangleEdgeKeys(up: boolean, x: number, y: number): [string, string, string] {
+  return up
+    ? [edge('r', x, y), edge('l', x, y), edge('h', x, y)]
+    : [edge('h', x, y + 1), edge('r', x + 1, y), edge('l', x, y)];
+}
+
+function checkInput(sides: readonly number[], boundary: readonly string[]): void {
+  if (sides.length !== 6 || sides.some((s) => !Number.isInteger(s) || s < 0)) {
+    throw new ReferenceComputationError('invalid_region', `Side lengths: expected six non-negative integers, received [${sides.join(', ')}]`);
+  }
+  const [s1, s2, s3, s4, s5, s6] = sides as [number, number, number, number, number, number];
+  if (s1 + s2 !== s4 + s5 || s2 + s3 !== s5 + s6) {
+    throw new ReferenceComputationError(
+      'invalid_region',
+      `Hexagon closure: expected s1+s2 = s4+s5 and s2+s3 = s5+s6, received [${sides.join(', ')}]`,
+    );
+  }
+  if (boundary.length !== 6) {
+    throw new ReferenceComputationError('invalid_boundary', `Boundary: expected six strings, received ${boundary.length}`);
+  }
+  boundary.forEach((b, i) => {
+    if (b.length !== sides[i]) {
+      throw new ReferenceComputationError('invalid_boundary', `Boundary side ${i + 1} length: expected ${sides[i]}, received ${b.length}`);
+    }
+  });
+}
+
+/** The boundary edges of the region, side by side, each side in clockwise order (geometry of DEVELOPERS.md). */
+function boundaryEdges(sides: readonly number[]): string[][] {
+  const [s1, s2, s3, s4, s5, s6] = sides as [number, number, number, number, number, number];
+  const N = s6 + s1 + s2;
+  const range = (len: number): number[] => Array.from({ length: len }, (_, i) => i);
+  return [
+    range(s1).map((i) => edge('r', 0, s6 + i)), // NW side, going up
+    range(s2).map((i) => edge('h', i, N - s2)), // top, going right
+    range(s3).map((i) => edge('l', s2 + i, N - s2 - i - 1)), // NE side, going down-right
+    range(s4).map((i) => edge('r', N - s4, s4 - i - 1)), // right cut, going down
+    range(s5).map((i) => edge('h', N - s4 - i - 1, 0)), // bottom, going left
+    range(s6).map((i) => edge('l', s6 - i - 1, i)), // bottom-left cut, going up-left
+  ];
+}
+
+function checkPieces(pieces: readonly NaivePiece[]): void {
+  pieces.forEach((p, i) => {
+    if (p.orientation !== 'up' && p.orientation !== 'down') {
+      throw new ReferenceComputationError('invalid_piece', `Piece ${i} orientation: expected 'up' or 'down', received ${String(p.orientation)}`);
+    }
+    if (!Array.isArray(p.labels) || p.labels.length !== 3 || p.labels.some((l) => typeof l !== 'string' || l === '')) {
+      throw new ReferenceComputationError('invalid_piece', `Piece ${i} labels: expected three nonempty strings, received ${JSON.stringify(p.labels)}`);
+    }
+    const w = p.weight;
+    const ok =
+      (w.type === 'integer' && Number.isInteger(w.value)) ||
+      (w.type === 'variable' && typeof w.name === 'string' && w.name !== '') ||
+      w.type === 'position';
+    if (!ok) throw new ReferenceComputationError('invalid_piece', `Piece ${i} weight: expected integer, variable or position, received ${JSON.stringify(w)}`);
+  });
+}
+
+/**
+ * Counts puzzles on a hexagonal region by plain backtracking over its unit triangles (bottom row first,
+ * left to right), matching labels on shared edges. Position weights are y_j − y_i with i = x+1 and
+ * j = 1 + the least x+y over the triangle's vertices (y_t is polynomial variable t−1, t = 1..N with N the
+ * completed side); named variables, sorted by name, are the variables N, N+1, … after them.
+ */
+export function naiveCount(
+  sides: readonly number[],
+  boundary: readonly string[],
+  pieces: readonly NaivePiece[],
+): NaiveCountResult {
+  checkInput(sides, boundary);
+  checkPieces(pieces);
+  const [s1, s2, , s4, , s6] = sides as [number, number, number, number, number, number];
+  const N = s6 + s1 + s2;
+  const inside = (x: number, y: number): boolean =>
+    x >= 0 && y >= 0 && x + y <= N && x + y >= s6 && y <= N - s2 && x <= N - s4;
+
+  const labels = new Map<string, string>();
+  boundaryEdges(sides).forEach((side, i) =>
+    side.forEach((e, j) => labels.set(e, boundary[i]![j]!)),
+  );
+
+  const triangles: Array<{ up: boolean; x: number; y: number; edges: [string, string, string] }> = [];
+  for (let y = 0; y < N; y++) {
+    for (let x = 0; x < N; x++) {
+      if (inside(x, y) && inside(x + 1, y) && inside(x, y + 1)) triangles.push({ up: true, x, y, edges: triangleEdgeKeys(true, x, y) });
+      if (inside(x + 1, y) && inside(x, y + 1) && inside(x + 1, y + 1)) triangles.push({ up: false, x, y, edges: triangleEdgeKeys(false, x, y) });
+    }
+  }
+
+  const names = [...new Set(pieces.flatMap((p) => (p.weight.type === 'variable' ? [p.weight.name] : [])))].sort();
+  const weightOf = (p: NaivePiece, t: { up: boolean; x: number; y: number }): RefPolynomial | null => {
+    const w = p.weight;
+    if (w.type === 'integer') return w.value === 1 ? null : RefPolynomial.constant(BigInt(w.value));
+    if (w.type === 'variable') return RefPolynomial.variable(N + names.indexOf(w.name));
+    // The least x+y is at (x,y) for an up triangle and at (x+1,y) or (x,y+1) for a down one.
+    const i = t.x + 1;
+    const j = t.x + t.y + (t.up ? 0 : 1) + 1;
+    return RefPolynomial.difference(j - 1, i - 1);
+  };
+  const byOrientation = { up: pieces.filter((p) => p.orientation === 'up'), down: pieces.filter((p) => p.orientation === 'down') };
+
+  let fillings = 0n;
+  let value = RefPolynomial.zero();
+  const place = (index: number, weight: RefPolynomial): void => {
+    if (index === triangles.length) {
+      fillings++;
+      value = value.add(weight);
+      return;
+    }
+    const t = triangles[index]!;
+    for (const p of t.up ? byOrientation.up : byOrientation.down) {
+      const fresh: string[] = [];
+      let fits = true;
+      for (let s = 0; s < 3 && fits; s++) {
+        const e = t.edges[s]!;
+        const have = labels.get(e);
+        if (have === undefined) {
+          labels.set(e, p.labels[s]!);
+          fresh.push(e);
+        } else if (have !== p.labels[s]!) fits = false;
+      }
+      if (fits) {
+        const w = weightOf(p, t);
+        place(index + 1, w === null ? weight : weight.mul(w));
+      }
+      for (const e of fresh) labels.delete(e);
+    }
+  };
+  place(0, RefPolynomial.constant(1n));
+  return { fillings, value, variableNames: names };
+}
