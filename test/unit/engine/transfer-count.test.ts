@@ -1,0 +1,88 @@
+import { describe, expect, it } from 'vitest';
+import {
+  buildPieceSet,
+  countBoundary,
+  countCompletions,
+  fillingCountSemiring,
+  generatingSemiring,
+  integerSemiring,
+  polynomialSemiring,
+  statisticWeigher,
+  structureConstantSides,
+  theoryPieceSet,
+  triangleRegion,
+  makeRegion,
+} from '../../../src/engine/index.js';
+import { stringOfPartition } from '../../support/boundaries.js';
+
+const count = (theory: string, l: string, m: string, n: string) =>
+  countBoundary(triangleRegion(l.length), structureConstantSides(l, m, n), theoryPieceSet(theory), { semiring: integerSemiring });
+
+describe('cohomology structure constants', () => {
+  it('σ1² = σ2 + σ11 in Gr(2,4) [Pieri’s rule; Fulton, Young Tableaux, 1997]', () => {
+    const s1 = stringOfPartition([1, 0], 4);
+    const all = countCompletions(triangleRegion(4), [s1, '', s1, '', null, ''], theoryPieceSet('cohomology'), { semiring: integerSemiring });
+    // keys are side-5 strings read clockwise, i.e. ν reversed
+    const product = new Map([...all].map(([side5, v]) => [[...side5].reverse().join(''), v]));
+    expect(product).toEqual(new Map([[stringOfPartition([2, 0], 4), 1], [stringOfPartition([1, 1], 4), 1]]));
+  });
+
+  it('c_{21,21}^{321} = 2 in Gr(3,6) [value from memory]', () => {
+    expect(count('cohomology', stringOfPartition([2, 1, 0], 6), stringOfPartition([2, 1, 0], 6), stringOfPartition([3, 2, 1], 6))).toBe(2);
+  });
+
+  it('the identity class is a unit: c_{id,μ}^ν = δ_{μν} [common practice, no source]', () => {
+    const id = '000111';
+    for (const mu of ['010101', '101010', '111000']) {
+      expect(count('cohomology', id, mu, mu)).toBe(1);
+      expect(count('cohomology', id, mu, '011001')).toBe(0);
+    }
+  });
+});
+
+describe('other theories', () => {
+  it('equivariant: c_{10,10}^{10} = y2 − y1 on Gr(1,2) [localization: the tangent weight at the point; Knutson–Tao, Duke 2003]', () => {
+    const ring = polynomialSemiring(2);
+    const v = countBoundary(triangleRegion(2), structureConstantSides('10', '10', '10'), theoryPieceSet('equivariant'), { semiring: ring });
+    expect(ring.equals(v, ring.position(1, 2))).toBe(true);
+  });
+
+  it('K-theory: G1·G1 = G2 + G11 − G21 [Buch, Acta Math. 2002]', () => {
+    const s1 = stringOfPartition([1, 0], 4);
+    expect(count('k-theory', s1, s1, stringOfPartition([2, 0], 4))).toBe(1);
+    expect(count('k-theory', s1, s1, stringOfPartition([1, 1], 4))).toBe(1);
+    expect(count('k-theory', s1, s1, stringOfPartition([2, 1], 4))).toBe(-1);
+  });
+
+  it('dual K-theory on P^1: I_id² = I_id − I_pt, since I_id = O(−1) and O_pt² = 0 [hand computation, common practice]', () => {
+    expect(count('dual-k-theory', '01', '01', '01')).toBe(1);
+    expect(count('dual-k-theory', '01', '01', '10')).toBe(-1);
+  });
+
+  it('counts K-pieces with a generating polynomial: c_{1,1}^{21} has one puzzle with one K-piece [Buch 2002]', () => {
+    const s1 = stringOfPartition([1, 0], 4);
+    const v = countBoundary(triangleRegion(4), structureConstantSides(s1, s1, stringOfPartition([2, 1], 4)), theoryPieceSet('k-theory'), {
+      semiring: generatingSemiring,
+      weigher: statisticWeigher(new Set(['k-piece'])),
+    });
+    expect(v).toEqual([0, 1]);
+  });
+});
+
+describe('exactness', () => {
+  it('never overflows: 64 triangles of weight 2 give 2^64 [common practice, no source]', () => {
+    const set = buildPieceSet({ name: 'doubling', boundaryLabels: ['0'], pieces: [{ labels: ['0', '0', '0'], orientations: ['up', 'down'], weight: { type: 'integer', value: 2 } }] });
+    const v = countBoundary(triangleRegion(8), ['00000000', '', '00000000', '', '00000000', ''], set, { semiring: integerSemiring });
+    expect(v).toBe(2n ** 64n);
+    expect(countBoundary(triangleRegion(8), ['00000000', '', '00000000', '', '00000000', ''], set, { semiring: fillingCountSemiring })).toBe(1);
+  });
+
+  it('counts hexagons and parallelograms, not just triangles', () => {
+    // The all-0 labeling of any region has exactly one filling, by 0-triangles [common practice, no source].
+    for (const lengths of [[2, 1, 0, 2, 1, 0], [1, 2, 3, 1, 2, 3], [0, 2, 0, 2, 0, 2]]) {
+      const region = makeRegion(lengths);
+      const sides = lengths.map((s) => '0'.repeat(s));
+      expect(countBoundary(region, sides, theoryPieceSet('cohomology'), { semiring: fillingCountSemiring })).toBe(1);
+    }
+  });
+});
