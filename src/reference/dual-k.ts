@@ -1,17 +1,46 @@
-import { bruhatLeq, checkGrassmannian, grassmannianStrings, inv } from './grassmannian-strings.js';
+import { bruhatLeq, checkGrassmannian, checkString, grassmannianStrings, stringToPartition } from './grassmannian-strings.js';
 import { grothendieckTable } from './grothendieck.js';
 
 /**
+ * The Möbius function μ(λ, ν) of Bruhat order on Gr(k, n) strings, i.e. of Young's lattice of partitions:
+ * (−1)^{|ν/λ|} when ν/λ is a set of boxes no two in one row or column, 0 otherwise (this lattice is
+ * distributive, so μ is nonzero exactly on intervals that are Boolean [Stanley, Enumerative
+ * Combinatorics I, 1986, Ex. 3.9.6]). It is NOT (−1)^{inv ν − inv λ} in general: for Gr(1,3), μ(001, 100) = 0.
+ */
+export function bruhatMobius(lambda: string, nu: string): bigint {
+  checkString(lambda);
+  checkString(nu, [...lambda].filter((c) => c === '1').length, lambda.length);
+  if (!bruhatLeq(lambda, nu)) return 0n;
+  const lp = stringToPartition(lambda);
+  const np = stringToPartition(nu);
+  const columns = new Set<number>();
+  let boxes = 0;
+  for (let i = 0; i < lp.length; i++) {
+    const grow = np[i]! - lp[i]!;
+    if (grow > 1) return 0n;
+    if (grow === 1) {
+      if (columns.has(np[i]!)) return 0n;
+      columns.add(np[i]!);
+      boxes++;
+    }
+  }
+  return boxes % 2 === 0 ? 1n : -1n;
+}
+
+/**
  * Converts a K-theory table in the structure-sheaf basis O_λ into the ideal-sheaf basis I_λ of Gr(k, n):
- * with O_λ = Σ_{ν≥λ} I_ν and I_λ = Σ_{ν≥λ} (−1)^{inv ν − inv λ} O_ν (Möbius inversion on Bruhat order),
- * d_{λμ}^ν = Σ_{α≥λ, β≥μ, γ≤ν} (−1)^{inv α − inv λ + inv β − inv μ} c_{αβ}^γ. Keys `${λ},${μ},${ν}`, zeros omitted.
+ * O_λ = Σ_{ν≥λ} I_ν (the boundary of X_λ is the union of the X_ν, ν > λ), so by Möbius inversion
+ * I_λ = Σ_{ν≥λ} μ(λ,ν) O_ν and d_{λμ}^ν = Σ_{α≥λ, β≥μ, γ≤ν} μ(λ,α)·μ(μ,β)·c_{αβ}^γ.
+ * Keys `${λ},${μ},${ν}`, zero values omitted.
  */
 export function dualKFromStructureSheaves(k: number, n: number, table: ReadonlyMap<string, bigint>): Map<string, bigint> {
   checkGrassmannian(k, n);
   const strings = grassmannianStrings(k, n);
   const m = strings.length;
   const leq: boolean[][] = strings.map((a) => strings.map((b) => bruhatLeq(a, b)));
-  const sign = (a: number, b: number): bigint => ((inv(strings[a]!) - inv(strings[b]!)) % 2 === 0 ? 1n : -1n);
+  const mob: bigint[][] = strings.map((a) => strings.map((b) => bruhatMobius(a, b)));
+  // mob[l][a] = μ(l, a); sign(a, l) below is μ(l, a).
+  const sign = (a: number, l: number): bigint => mob[l]![a]!;
   const c = (a: number, b: number, g: number): bigint =>
     table.get(`${strings[a]},${strings[b]},${strings[g]}`) ?? 0n;
   const out = new Map<string, bigint>();
