@@ -2,12 +2,14 @@
 import yargs from 'yargs';
 import { hideBin } from 'yargs/helpers';
 import { countCommand } from './commands/count-command.js';
+import { crosscheckCommand } from './commands/crosscheck-command.js';
 import { showCommand } from './commands/show-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
   .command(countCommand)
   .command(showCommand)
+  .command(crosscheckCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()
   .fail((msg, err, y) => {

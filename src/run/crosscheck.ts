@@ -1,0 +1,112 @@
+import {
+  countCompletions,
+  integerSemiring,
+  polynomialSemiring,
+  polyTerms,
+  theoryPieceSet,
+  triangleRegion,
+  type PieceSet,
+  type Term,
+} from '../engine/index.js';
+import { grassmannianStrings } from '../reference/grassmannian-strings.js';
+import { referenceTable, type ReferenceTheory } from '../reference/crosscheck-tables.js';
+
+export interface CrosscheckOptions {
+  readonly theory: ReferenceTheory;
+  readonly maxN: number;
+  /** Checks this piece set against the theory's reference instead of the built-in one (e.g. a custom set). */
+  readonly pieces?: PieceSet;
+  /** Called after each (λ, μ) pair with the pairs done and the pairs in all. */
+  readonly onProgress?: (done: number, total: number) => void;
+}
+
+export interface CrosscheckRow {
+  readonly n: number;
+  readonly k: number;
+  readonly triples: number;
+  readonly agreements: number;
+}
+
+export interface Disagreement {
+  readonly lambda: string;
+  readonly mu: string;
+  readonly nu: string;
+  readonly engine: string;
+  readonly reference: string;
+}
+
+export interface CrosscheckSummary {
+  readonly theory: ReferenceTheory;
+  readonly maxN: number;
+  readonly rows: readonly CrosscheckRow[];
+  readonly triples: number;
+  readonly agreements: number;
+  readonly firstDisagreement: Disagreement | undefined;
+  readonly seconds: number;
+}
+
+type Terms = readonly { readonly coefficient: bigint; readonly exponents: readonly number[] }[];
+
+// A canonical text for comparing term lists from the two sides: sorted, zero exponents kept.
+function canonical(terms: Terms): string {
+  return terms
+    .map((t) => `${t.coefficient}*[${t.exponents.join(',')}]`)
+    .sort()
+    .join(' + ') || '0';
+}
+
+function engineProducts(theory: ReferenceTheory, pieces: PieceSet, lambda: string, mu: string): Map<string, Terms> {
+  const n = lambda.length;
+  const sides = [lambda, '', mu, '', null, ''];
+  const out = new Map<string, Terms>();
+  if (theory === 'equivariant') {
+    for (const [side5, v] of countCompletions(triangleRegion(n), sides, pieces, { semiring: polynomialSemiring(n) })) {
+      out.set([...side5].reverse().join(''), polyTerms(v, n) as Term[]);
+    }
+  } else {
+    for (const [side5, v] of countCompletions(triangleRegion(n), sides, pieces, { semiring: integerSemiring })) {
+      out.set([...side5].reverse().join(''), [{ coefficient: BigInt(v), exponents: new Array<number>(n).fill(0) }]);
+    }
+  }
+  return out;
+}
+
+/** Compares the engine with the independent reference on every triple of every Gr(k, n), n ≤ maxN. */
+export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
+  const started = performance.now();
+  const pieces = options.pieces ?? theoryPieceSet(options.theory);
+  const grassmannians: [number, number, string[]][] = [];
+  for (let n = 1; n <= options.maxN; n++) for (let k = 0; k <= n; k++) grassmannians.push([n, k, grassmannianStrings(k, n)]);
+  const total = grassmannians.reduce((s, [, , strings]) => s + strings.length ** 2, 0);
+  let done = 0;
+  let firstDisagreement: Disagreement | undefined;
+  const rows: CrosscheckRow[] = [];
+  for (const [n, k, strings] of grassmannians) {
+    const reference = referenceTable(options.theory, k, n);
+    let triples = 0;
+    let agreements = 0;
+    for (const lambda of strings) {
+      for (const mu of strings) {
+        const engine = engineProducts(options.theory, pieces, lambda, mu);
+        for (const nu of strings) {
+          triples++;
+          const e = canonical(engine.get(nu) ?? []);
+          const r = canonical(reference.get(`${lambda},${mu},${nu}`)?.terms ?? []);
+          if (e === r) agreements++;
+          else firstDisagreement ??= { lambda, mu, nu, engine: e, reference: r };
+        }
+        options.onProgress?.(++done, total);
+      }
+    }
+    rows.push({ n, k, triples, agreements });
+  }
+  return {
+    theory: options.theory,
+    maxN: options.maxN,
+    rows,
+    triples: rows.reduce((s, r) => s + r.triples, 0),
+    agreements: rows.reduce((s, r) => s + r.agreements, 0),
+    firstDisagreement,
+    seconds: (performance.now() - started) / 1000,
+  };
+}
