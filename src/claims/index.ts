@@ -1,0 +1,8 @@
+/** The claims layer's public surface: what a claim means, for the runner, the store and the CLI. */
+export * from './claim-api.js';
+export { claimSchema, claimJsonSchema, CLAIM_SCHEMA_FILE } from './claim-schema.js';
+export type { Claim, ClaimInput, TransformStep, ContentCondition, SubstitutionStep, Measure, Relation, TheoryInput } from './claim-schema.js';
+export { loadClaim, parseClaim } from './load-claim.js';
+export { claimFingerprint, canonicalClaimJson, ENGINE_VERSION } from './claim-fingerprint.js';
+export { planClaim, type ClaimPlanExt } from './plan-claim.js';
+export { applyTransform } from './boundary-transform.js';

@@ -1,0 +1,206 @@
+import { makeRegion } from '../engine/index.js';
+import { AppError, toAppError } from '../errors.js';
+import { evalAffine } from './affine.js';
+import type { ClaimPlan, Instance, SizeClass } from './claim-api.js';
+import type { Claim } from './claim-schema.js';
+import { compileClaim, type CompiledClaim } from './compile-claim.js';
+import { contentVectors, multinomial, rankString, unrankString } from './multiset-rank.js';
+
+/** One group of sides sharing a content vector; `sides` in radix order (side 5 last, least significant). */
+interface Group {
+  readonly sides: readonly number[];
+  readonly contents: readonly { readonly counts: readonly number[]; readonly strings: bigint; readonly offset: bigint; readonly size: bigint }[];
+  readonly size: bigint;
+}
+
+interface Layout {
+  readonly cls: SizeClass;
+  /** Most significant first; the group holding side 5 comes last. */
+  readonly groups: readonly Group[];
+  readonly count: bigint;
+}
+
+/** A plan with a few extras beyond the runner contract. */
+export interface ClaimPlanExt extends ClaimPlan {
+  readonly compiled: CompiledClaim;
+  /** The class of given variable values (whatever the bounds), e.g. to resolve an `Instance.classKey`. */
+  classForKey(key: string): SizeClass;
+}
+
+const NO_VARIABLES = 'all';
+
+function classKey(values: Readonly<Record<string, number>>): string {
+  const s = Object.entries(values).map(([k, v]) => `${k}=${v}`).join(',');
+  return s || NO_VARIABLES;
+}
+
+function layoutOf(compiled: CompiledClaim, cls: SizeClass): Layout {
+  const alphabet = compiled.left.boundaryLabels;
+  const groupOf = new Map<number, number[]>();
+  for (const g of compiled.sameContent) for (const s of g) groupOf.set(s, [...g]);
+  const fixedBySide = new Map<number, Map<number, number>>();
+  let impossible = false;
+  for (const c of compiled.counts) {
+    const n = evalAffine(c.count, cls.variables);
+    const label = alphabet.indexOf(c.label);
+    const m = fixedBySide.get(c.side) ?? new Map<number, number>();
+    if (m.has(label) && m.get(label) !== n) impossible = true;
+    m.set(label, n);
+    fixedBySide.set(c.side, m);
+  }
+  const seen = new Set<number>();
+  const groups: Group[] = [];
+  for (const start of [0, 1, 2, 3, 5, 4]) {
+    if (seen.has(start)) continue;
+    const members = (groupOf.get(start) ?? [start]).slice().sort((a, b) => (a === 4 ? 1 : b === 4 ? -1 : a - b));
+    members.forEach((s) => seen.add(s));
+    const fixed = new Map<number, number>();
+    for (const s of members) {
+      for (const [l, n] of fixedBySide.get(s) ?? []) {
+        if (fixed.has(l) && fixed.get(l) !== n) impossible = true;
+        fixed.set(l, n);
+      }
+    }
+    const length = cls.lengths[members[0]!]!;
+    let offset = 0n;
+    const contents = (impossible ? [] : contentVectors(length, alphabet.length, fixed)).map((counts) => {
+      const strings = multinomial(counts);
+      const size = strings ** BigInt(members.length);
+      const entry = { counts, strings, offset, size };
+      offset += size;
+      return entry;
+    });
+    groups.push({ sides: members, contents, size: offset });
+  }
+  // The group holding side 5 is least significant, so runs of consecutive indices vary side 5 only.
+  const five = groups.findIndex((g) => g.sides.includes(4));
+  const ordered = [...groups.slice(0, five), ...groups.slice(five + 1), groups[five]!];
+  return { cls, groups: ordered, count: ordered.reduce((p, g) => p * g.size, 1n) };
+}
+
+function sizeClassFor(compiled: CompiledClaim, values: Readonly<Record<string, number>>): SizeClass {
+  const lengths = compiled.lengths.map((l) => evalAffine(l, values)) as unknown as SizeClass['lengths'];
+  return { key: classKey(values), variables: values, lengths, size: lengths.reduce((s, x) => s + x, 0) };
+}
+
+function compareClasses(a: SizeClass, b: SizeClass): number {
+  if (a.size !== b.size) return a.size - b.size;
+  for (let i = 0; i < 6; i++) if (a.lengths[i] !== b.lengths[i]) return a.lengths[i]! - b.lengths[i]!;
+  return 0;
+}
+
+/** Every assignment of the variables in the box, in declaration order, last variable fastest. */
+function assignments(compiled: CompiledClaim): Record<string, number>[] {
+  let out: Record<string, number>[] = [{}];
+  for (const v of compiled.variables) {
+    const next: Record<string, number>[] = [];
+    for (const a of out) for (let x = v.min; x <= v.max; x++) next.push({ ...a, [v.name]: x });
+    out = next;
+  }
+  return out;
+}
+
+/** The sweep plan of a claim: ordered size classes and the index ↔ instance bijection inside each. */
+export function planClaim(claim: Claim): ClaimPlanExt {
+  const compiled = compileClaim(claim);
+  const alphabet = compiled.left.boundaryLabels;
+  const layouts = new Map<string, Layout>();
+  const layout = (cls: SizeClass) => {
+    let l = layouts.get(cls.key);
+    if (!l) {
+      l = layoutOf(compiled, cls);
+      layouts.set(cls.key, l);
+    }
+    return l;
+  };
+  const outOfRange = (cls: SizeClass, index: bigint) =>
+    new AppError('invalid_argument', `Instance index: expected 0 ≤ index < ${layout(cls).count} in class ${cls.key}, received ${index}`, { path: '--instance' });
+
+  return {
+    compiled,
+    classes(maxOverride) {
+      const c = maxOverride && Object.keys(maxOverride).length ? compileClaim(claim, undefined, maxOverride) : compiled;
+      const seen = new Set<string>();
+      const out: SizeClass[] = [];
+      for (const values of assignments(c)) {
+        const cls = sizeClassFor(compiled, values);
+        const l = layout(cls);
+        // Values giving the same lengths and the same fixed counts name the same instances: keep the first.
+        const identity = `${cls.lengths.join(',')}|${compiled.counts.map((k) => evalAffine(k.count, values)).join(',')}`;
+        if (l.count === 0n || seen.has(identity)) continue;
+        seen.add(identity);
+        out.push(cls);
+      }
+      return out.sort(compareClasses);
+    },
+    instanceCount: (cls) => layout(cls).count,
+    instanceAt(cls, index) {
+      const l = layout(cls);
+      if (index < 0n || index >= l.count) throw outOfRange(cls, index);
+      const sides: string[] = ['', '', '', '', '', ''];
+      let rest = index;
+      for (let g = l.groups.length - 1; g >= 0; g--) {
+        const group = l.groups[g]!;
+        let r = rest % group.size;
+        rest /= group.size;
+        const content = group.contents.find((c) => r < c.offset + c.size)!;
+        r -= content.offset;
+        for (let k = group.sides.length - 1; k >= 0; k--) {
+          const s = unrankString(r % content.strings, content.counts);
+          r /= content.strings;
+          sides[group.sides[k]!] = s.map((a) => alphabet[a]!).join('');
+        }
+      }
+      return { classKey: cls.key, index, sides };
+    },
+    indexOf(cls, sides) {
+      if (sides.length !== 6) return undefined;
+      const l = layout(cls);
+      const labelIdx: number[][] = [];
+      for (let i = 0; i < 6; i++) {
+        const chars = [...sides[i]!];
+        if (chars.length !== cls.lengths[i]) return undefined;
+        const idx = chars.map((c) => alphabet.indexOf(c));
+        if (idx.some((x) => x < 0)) return undefined;
+        labelIdx.push(idx);
+      }
+      let index = 0n;
+      for (const group of l.groups) {
+        const counts = new Array<number>(alphabet.length).fill(0);
+        for (const a of labelIdx[group.sides[0]!]!) counts[a]!++;
+        const key = counts.join(',');
+        const content = group.contents.find((c) => c.counts.join(',') === key);
+        if (!content) return undefined;
+        let r = 0n;
+        for (const s of group.sides) {
+          const own = new Array<number>(alphabet.length).fill(0);
+          for (const a of labelIdx[s]!) own[a]!++;
+          if (own.join(',') !== key) return undefined;
+          r = r * content.strings + rankString(labelIdx[s]!, content.counts);
+        }
+        index = index * group.size + content.offset + r;
+      }
+      return index;
+    },
+    classForKey(key) {
+      const values: Record<string, number> = {};
+      if (key !== NO_VARIABLES) {
+        for (const part of key.split(',')) {
+          const [name, value] = part.split('=');
+          values[name!] = Number(value);
+        }
+      }
+      const names = compiled.variables.map((v) => v.name);
+      if (Object.keys(values).join(',') !== names.join(',') || Object.values(values).some((v) => !Number.isInteger(v))) {
+        throw new AppError('invalid_argument', `Class key: expected values of ${names.join(', ') || 'no variables'} such as '${classKey(Object.fromEntries(names.map((n) => [n, 1])))}', received '${key}'`, { path: '--instance' });
+      }
+      const cls = sizeClassFor(compiled, values);
+      try {
+        makeRegion(cls.lengths);
+      } catch (e) {
+        throw toAppError(e, '--instance');
+      }
+      return cls;
+    },
+  };
+}
