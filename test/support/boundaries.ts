@@ -53,3 +53,30 @@ export function stringOfPartition(parts: readonly number[], n: number): string {
   }
   return s + '0'.repeat(zeros - before);
 }
+
+/** The partition of a Grassmannian string (inverse of stringOfPartition). */
+export function partitionOfString(s: string): number[] {
+  const parts: number[] = [];
+  let zerosAfter = [...s].filter((c) => c === '0').length;
+  for (const c of s) {
+    if (c === '0') zerosAfter--;
+    else parts.push(zerosAfter);
+  }
+  return parts;
+}
+
+/** Codimension of a Schubert class: pairs i < j with s_i = 1, s_j = 0. */
+export function inversions(s: string): number {
+  let ones = 0;
+  let inv = 0;
+  for (const c of s) {
+    if (c === '1') ones++;
+    else inv += ones;
+  }
+  return inv;
+}
+
+/** Containment of partitions, i.e. Bruhat order on Grassmannian strings. */
+export function contains(big: readonly number[], small: readonly number[]): boolean {
+  return small.every((p, i) => p <= (big[i] ?? 0));
+}
