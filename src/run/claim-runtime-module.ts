@@ -1,0 +1,29 @@
+import type { ClaimPlan, EvaluateOptions, Evaluator } from '../claims/claim-api.js';
+
+/** A claim ready to sweep: its plan (classes, index ↔ instance) and an evaluator with its caches. */
+export interface ClaimRuntime {
+  readonly plan: ClaimPlan;
+  readonly evaluator: Evaluator;
+}
+
+/** The shape of a module that turns a claim's canonical JSON into a runtime (the real one or a test double). */
+export interface ClaimRuntimeModule {
+  createClaimRuntime(canonicalJson: string, options: EvaluateOptions): ClaimRuntime;
+}
+
+/** A claim as the runner receives it: already validated, canonical and fingerprinted by the claims layer. */
+export interface SweepClaim {
+  readonly id: string;
+  readonly canonicalJson: string;
+  readonly fingerprint: string;
+  readonly engineVersion: string;
+  /** The claim file it came from, for replay commands. */
+  readonly file?: string | undefined;
+}
+
+/** Imports a runtime module by URL and checks it has the expected export. */
+export async function importClaimRuntime(url: string): Promise<ClaimRuntimeModule> {
+  const mod = (await import(url)) as Partial<ClaimRuntimeModule>;
+  if (typeof mod.createClaimRuntime !== 'function') throw new Error(`runtime module ${url} lacks createClaimRuntime`);
+  return mod as ClaimRuntimeModule;
+}

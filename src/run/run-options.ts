@@ -1,0 +1,47 @@
+import { availableParallelism } from 'node:os';
+import { z } from 'zod';
+import { AppError } from '../errors.js';
+import { DEFAULT_STORE_PATH } from '../store/index.js';
+
+const maxEntry = z
+  .string()
+  .regex(/^[A-Za-z_][A-Za-z0-9_]*=\d+$/, { message: "Bound: expected 'variable=value' with a nonnegative integer value" });
+
+/** Options of `puzzlesweep run`; each field is one command-line flag (camelCase of the flag's name). */
+export const RunOptions = z.object({
+  /** `--max var=value`: raise (or lower) a variable's upper bound for this run. */
+  max: z
+    .array(maxEntry)
+    .default([])
+    .transform((entries) => Object.fromEntries(entries.map((e) => [e.slice(0, e.indexOf('=')), Number(e.slice(e.indexOf('=') + 1))])) as Record<string, number>),
+  workers: z.number().int().min(1).max(256).default(() => availableParallelism()),
+  db: z.string().min(1).default(DEFAULT_STORE_PATH),
+  stopAtFirst: z.boolean().default(false),
+  maxCounterexamples: z.number().int().min(1).optional(),
+  timeLimit: z.number().positive().optional(),
+  exact: z.boolean().default(false),
+  json: z.boolean().default(false),
+  /** Instances per chunk: the unit of work, resume and lease. */
+  chunkSize: z.number().int().min(1).max(1_000_000).default(500),
+});
+
+export type RunOptions = z.output<typeof RunOptions>;
+export type RunOptionsInput = z.input<typeof RunOptions>;
+
+const kebab = (s: string) => s.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
+
+/** Validates run options; the error names the flag, e.g. `→ at --max-counterexamples`. */
+export function parseRunOptions(input: RunOptionsInput): RunOptions {
+  const parsed = RunOptions.safeParse(input);
+  if (parsed.success) return parsed.data;
+  const issue = parsed.error.issues[0]!;
+  const flag = `--${kebab(String(issue.path[0] ?? 'options'))}`;
+  let received: unknown = input;
+  for (const p of issue.path) received = received && typeof received === 'object' ? (received as Record<PropertyKey, unknown>)[p as PropertyKey] : undefined;
+  const at = issue.message.indexOf('expected');
+  const expected = (at >= 0 ? issue.message.slice(at) : `expected ${issue.message}`).replace(/, received .*$/, '');
+  throw new AppError('invalid_argument', `${flag}: ${expected}, received ${JSON.stringify(received) ?? 'nothing'}`, {
+    path: flag,
+    hint: 'see puzzlesweep run --help',
+  });
+}

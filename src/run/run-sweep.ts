@@ -1,0 +1,53 @@
+import { openStore, DEFAULT_STORE_PATH } from '../store/index.js';
+import { importClaimRuntime, type SweepClaim } from './claim-runtime-module.js';
+import type { RunOptions } from './run-options.js';
+import { sweepClaim, type SweepProgress } from './sweep-claim.js';
+import type { ClaimSummary, SweepSummary } from './sweep-summary.js';
+import { WorkerPool } from './worker-pool.js';
+
+/** One `run` invocation: claims already loaded by the claims layer, options already validated. */
+export interface SweepInput {
+  readonly claims: readonly SweepClaim[];
+  readonly options: RunOptions;
+  /** Aborting stops handing out chunks; finished chunks are stored and the run is marked interrupted. */
+  readonly signal?: AbortSignal | undefined;
+  readonly onProgress?: ((p: SweepProgress) => void) | undefined;
+  /** File URL of a claim runtime module; the compiled claims runtime when absent. */
+  readonly runtimeModule?: string | undefined;
+}
+
+/** Sweeps each claim in turn on one worker pool and one store; returns data, prints nothing. */
+export async function runSweep(input: SweepInput): Promise<SweepSummary> {
+  const began = Date.now();
+  const { options } = input;
+  const runtime = await importClaimRuntime(input.runtimeModule ?? new URL('./claim-runtime.js', import.meta.url).href);
+  const db = openStore(options.db);
+  const pool = new WorkerPool(options.workers);
+  const deadline = options.timeLimit !== undefined ? began + options.timeLimit * 1000 : undefined;
+  const claims: ClaimSummary[] = [];
+  let workerCrashes = 0;
+  try {
+    for (const claim of input.claims) {
+      if (input.signal?.aborted) break;
+      const { plan } = runtime.createClaimRuntime(claim.canonicalJson, { exact: options.exact });
+      const ctx = {
+        db,
+        pool,
+        options,
+        runtimeModule: input.runtimeModule,
+        signal: input.signal,
+        deadline,
+        onProgress: input.onProgress,
+        dbArg: options.db === DEFAULT_STORE_PATH ? undefined : options.db,
+      };
+      claims.push(await sweepClaim(ctx, claim, plan));
+    }
+  } finally {
+    workerCrashes = pool.crashes;
+    await pool.destroy();
+    db.close();
+  }
+  const interrupted = claims.some((c) => c.status === 'interrupted') || (input.signal?.aborted ?? false);
+  const exitCode = interrupted ? 130 : claims.some((c) => c.counterexamples > 0) ? 1 : 0;
+  return { db: options.db, claims, interrupted, elapsedMs: Date.now() - began, workerCrashes, exitCode };
+}

@@ -1,0 +1,78 @@
+import type { Measured } from '../claims/claim-api.js';
+import type { RunStatus, StopReason, SweepMethod } from '../store/index.js';
+
+/** The outcome of one side-length class in this run. */
+export interface ClassSummary {
+  readonly key: string;
+  readonly size: number;
+  readonly lengths: readonly number[];
+  /** Instances in the class (decimal string: counts may exceed 2^53). */
+  readonly instances: string;
+  readonly checked: number;
+  readonly holds: number;
+  readonly fails: number;
+  /** `verified`: fully swept, no counterexample; `counterexample`: one is stored; `incomplete`: not fully swept yet. */
+  readonly state: 'verified' | 'counterexample' | 'incomplete';
+  readonly method?: SweepMethod | undefined;
+  readonly errorBound?: number | undefined;
+}
+
+/** The first counterexample of a claim in sweep order, with a command that recomputes it. */
+export interface FirstCounterexample {
+  readonly classKey: string;
+  readonly index: string;
+  readonly size: number;
+  readonly left: Measured;
+  readonly right: Measured;
+  readonly replay: string;
+}
+
+/** Everything one claim's sweep produced; the CLI prints it, programs read it with --json. */
+export interface ClaimSummary {
+  readonly claimId: string;
+  readonly fingerprint: string;
+  readonly file?: string | undefined;
+  readonly runId: number;
+  readonly status: Exclude<RunStatus, 'running'>;
+  readonly stopReason: StopReason;
+  readonly instancesChecked: number;
+  readonly holds: number;
+  readonly skippedZero: number;
+  readonly paired: number;
+  /** Modular "fails" that exact recomputation overturned. */
+  readonly overturned: number;
+  readonly newCounterexamples: number;
+  /** Confirmed counterexamples in the store for this claim after the run (old and new). */
+  readonly counterexamples: number;
+  readonly rechecked: { readonly checked: number; readonly stillFail: number; readonly nowHold: number };
+  /** `modular` when any comparison of this run used modular evaluation. */
+  readonly method: SweepMethod;
+  /** Union bound on a false "holds" over this run's modular comparisons. */
+  readonly errorBound: number;
+  readonly classes: readonly ClassSummary[];
+  readonly firstCounterexample?: FirstCounterexample | undefined;
+  /** For "up to some permutation" claims: permutations found, and the single one if one serves all. */
+  readonly permutations?: { readonly instances: number; readonly distinct: number; readonly common?: readonly number[] | undefined } | undefined;
+  readonly elapsedMs: number;
+}
+
+/** A whole `run` invocation. */
+export interface SweepSummary {
+  readonly db: string;
+  readonly claims: readonly ClaimSummary[];
+  readonly interrupted: boolean;
+  readonly elapsedMs: number;
+  /** Worker threads that died mid-task (each task retried, up to the bound). */
+  readonly workerCrashes: number;
+  /** 0 holds on everything swept, 1 a counterexample is known, 130 interrupted. */
+  readonly exitCode: 0 | 1 | 130;
+}
+
+const shellQuote = (s: string) => (/^[\w./=:,+-]+$/.test(s) ? s : `'${s.replace(/'/g, `'\\''`)}'`);
+
+/** The ready-to-paste command that recomputes one instance. */
+export function replayCommand(claim: string, classKey: string, index: bigint | string, db?: string): string {
+  const parts = ['puzzlesweep', 'replay', shellQuote(claim), '--instance', shellQuote(`${classKey}:${index}`)];
+  if (db) parts.push('--db', shellQuote(db));
+  return parts.join(' ');
+}

@@ -1,0 +1,47 @@
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { Piscina } from 'piscina';
+import { AppError } from '../errors.js';
+import type { WorkerReply, WorkerTask } from './worker-task.js';
+
+/** How often a task is tried before the run gives up with `worker_crashed`. */
+export const MAX_ATTEMPTS = 3;
+
+// The worker always runs compiled JavaScript: under vitest this module is a .ts source in src/, so point at dist/.
+function workerEntryUrl(): string {
+  const here = fileURLToPath(import.meta.url);
+  if (!here.endsWith('.ts')) return new URL('./sweep-worker.js', import.meta.url).href;
+  const distFile = here.replace(/[\\/]src[\\/]run[\\/][^\\/]+\.ts$/, '/dist/run/sweep-worker.js');
+  return pathToFileURL(distFile).href;
+}
+
+/** A piscina pool that retries a task whose worker died, a bounded number of times. */
+export class WorkerPool {
+  private readonly pool: Piscina<WorkerTask, WorkerReply>;
+  /** Crashes seen so far (each one retried or reported). */
+  crashes = 0;
+
+  constructor(readonly size: number) {
+    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, idleTimeout: 60_000 });
+  }
+
+  /** Runs one task; a dead worker means another try on a fresh one, up to MAX_ATTEMPTS. */
+  async run(task: WorkerTask, what: string): Promise<WorkerReply> {
+    let last: unknown;
+    for (let attempt = 0; attempt < MAX_ATTEMPTS; attempt++) {
+      try {
+        return await this.pool.run({ ...task, attempt });
+      } catch (e) {
+        last = e;
+        this.crashes++;
+      }
+    }
+    throw new AppError('worker_crashed', `Worker: expected ${what} to finish, received ${MAX_ATTEMPTS} crashed attempts (${(last as Error)?.message ?? String(last)})`, {
+      cause: last,
+      hint: 'the chunk is left unfinished in the store; rerun the same command to resume, or try fewer --workers if memory is short',
+    });
+  }
+
+  async destroy(): Promise<void> {
+    await this.pool.destroy();
+  }
+}

@@ -1,0 +1,60 @@
+import type { Measured } from '../claims/claim-api.js';
+import type { CounterexampleRecord } from '../store/index.js';
+
+interface TaskBase {
+  /** File URL of a runtime module; the compiled claims runtime next to the worker when absent. */
+  readonly runtimeModule?: string | undefined;
+  readonly canonicalJson: string;
+  readonly fingerprint: string;
+  readonly exact: boolean;
+  /** Raised variable bounds, so classes beyond the claim's own range can be found by key. */
+  readonly max: Readonly<Record<string, number>>;
+  readonly classKey: string;
+  /** 0 on the first try; the crash injection of tests reads it. */
+  readonly attempt: number;
+}
+
+/** Sweep instances [start, end) of one class. */
+export interface ChunkTask extends TaskBase {
+  readonly kind: 'chunk';
+  readonly start: bigint;
+  readonly end: bigint;
+}
+
+/** Re-check stored counterexamples exactly. */
+export interface ConfirmTask extends TaskBase {
+  readonly kind: 'confirm';
+  readonly indices: readonly bigint[];
+}
+
+export type WorkerTask = ChunkTask | ConfirmTask;
+
+/** Tallies and findings of one chunk. */
+export interface ChunkResult {
+  readonly checked: number;
+  readonly holds: number;
+  readonly fails: number;
+  readonly skippedZero: number;
+  readonly paired: number;
+  /** Modular "fails" that the exact recomputation found to hold (counted as holds). */
+  readonly overturned: number;
+  readonly errorBound: number;
+  readonly exact: boolean;
+  readonly durationMs: number;
+  readonly counterexamples: readonly CounterexampleRecord[];
+  readonly permutations: readonly { readonly index: bigint; readonly permutation: readonly number[] }[];
+}
+
+/** An error as it crosses the thread boundary: structured clone would drop the code and hint. */
+export interface SerializedError {
+  readonly code: string;
+  readonly message: string;
+  readonly stack?: string | undefined;
+  readonly path?: string | undefined;
+  readonly hint?: string | undefined;
+}
+
+export type WorkerReply =
+  | { readonly ok: true; readonly chunk: ChunkResult }
+  | { readonly ok: true; readonly confirmed: readonly { readonly index: bigint; readonly status: 'fails' | 'holds'; readonly left: Measured; readonly right: Measured }[] }
+  | { readonly ok: false; readonly error: SerializedError };

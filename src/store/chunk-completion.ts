@@ -1,0 +1,51 @@
+import { insertCounterexample, type CounterexampleRecord } from './counterexample-records.js';
+import type { Store } from './open-store.js';
+
+/** What a finished chunk reports; written together with its results in one transaction. */
+export interface ChunkCompletion {
+  readonly chunkId: number;
+  readonly runId: number;
+  readonly fingerprint: string;
+  readonly classKey: string;
+  readonly checked: number;
+  readonly holds: number;
+  readonly fails: number;
+  readonly skippedZero: number;
+  readonly paired: number;
+  /** Union bound on a false "holds" over the chunk's modular comparisons (0 when exact). */
+  readonly errorBound: number;
+  readonly durationMs: number;
+  readonly counterexamples: readonly CounterexampleRecord[];
+  readonly permutations: readonly { readonly index: bigint; readonly permutation: readonly number[] }[];
+}
+
+/**
+ * Marks a leased chunk done and stores its counterexamples and permutations atomically, so a chunk
+ * is either fully counted or not at all. Returns the number of new counterexamples, or -1 if the
+ * lease was no longer ours (nothing is written then).
+ */
+export function completeChunk(db: Store, c: ChunkCompletion): number {
+  return db
+    .transaction(() => {
+      const updated = db
+        .prepare(
+          `UPDATE chunks SET state = 'done', checked = ?, holds = ?, fails = ?, skipped_zero = ?, paired = ?, error_bound = ?,
+             duration_ms = ?, finished_at = ? WHERE chunk_id = ? AND run_id = ? AND state = 'leased'`,
+        )
+        .run(c.checked, c.holds, c.fails, c.skippedZero, c.paired, c.errorBound, c.durationMs, new Date().toISOString(), c.chunkId, c.runId);
+      if (updated.changes === 0) return -1;
+      let added = 0;
+      for (const ce of c.counterexamples) if (insertCounterexample(db, c.fingerprint, c.runId, ce)) added++;
+      const perm = db.prepare('INSERT OR REPLACE INTO permutations (fingerprint, class_key, instance_index, permutation) VALUES (?, ?, ?, ?)');
+      for (const p of c.permutations) perm.run(c.fingerprint, c.classKey, p.index, JSON.stringify(p.permutation));
+      db.prepare('UPDATE runs SET instances_checked = instances_checked + ?, holds = holds + ?, counterexamples = counterexamples + ?, heartbeat_at = ? WHERE run_id = ?').run(
+        c.checked,
+        c.holds,
+        added,
+        new Date().toISOString(),
+        c.runId,
+      );
+      return added;
+    })
+    .immediate();
+}

@@ -1,0 +1,95 @@
+import type { Measured } from '../claims/claim-api.js';
+import type { Store } from './open-store.js';
+
+/** A counterexample confirmed with exact arithmetic, as stored and as read back. */
+export interface CounterexampleRecord {
+  readonly classKey: string;
+  readonly index: bigint;
+  readonly size: number;
+  readonly lengths: readonly number[];
+  readonly left: Measured;
+  readonly right: Measured;
+  readonly permutation?: readonly number[] | undefined;
+}
+
+/** A stored counterexample with its bookkeeping. */
+export interface StoredCounterexample extends CounterexampleRecord {
+  readonly fingerprint: string;
+  readonly foundRun: number;
+  readonly recheckedRun: number | null;
+  readonly recheck: 'fails' | 'holds' | null;
+}
+
+/** Inserts a confirmed counterexample once (a resumed or concurrent run never duplicates it). */
+export function insertCounterexample(db: Store, fingerprint: string, runId: number, c: CounterexampleRecord): boolean {
+  const info = db
+    .prepare(
+      `INSERT OR IGNORE INTO counterexamples (fingerprint, class_key, instance_index, size, lengths,
+         left_theory, left_sides, left_value, left_json, right_theory, right_sides, right_value, right_json,
+         permutation, confirmed_exact, found_run)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 1, ?)`,
+    )
+    .run(
+      fingerprint,
+      c.classKey,
+      c.index,
+      c.size,
+      JSON.stringify(c.lengths),
+      c.left.theory,
+      JSON.stringify(c.left.sides),
+      c.left.text,
+      JSON.stringify({ lengths: c.left.lengths, value: c.left.json }),
+      c.right.theory,
+      JSON.stringify(c.right.sides),
+      c.right.text,
+      JSON.stringify({ lengths: c.right.lengths, value: c.right.json }),
+      c.permutation ? JSON.stringify(c.permutation) : null,
+      runId,
+    );
+  return info.changes > 0;
+}
+
+function measured(theory: string, sides: string, text: string, json: string): Measured {
+  const j = JSON.parse(json) as { lengths: number[]; value: unknown };
+  return { theory, sides: JSON.parse(sides) as string[], text, lengths: j.lengths, json: j.value };
+}
+
+function fromRow(r: Record<string, unknown>): StoredCounterexample {
+  return {
+    fingerprint: r.fingerprint as string,
+    classKey: r.class_key as string,
+    index: r.instance_index as bigint,
+    size: Number(r.size),
+    lengths: JSON.parse(r.lengths as string) as number[],
+    left: measured(r.left_theory as string, r.left_sides as string, r.left_value as string, r.left_json as string),
+    right: measured(r.right_theory as string, r.right_sides as string, r.right_value as string, r.right_json as string),
+    permutation: r.permutation ? (JSON.parse(r.permutation as string) as number[]) : undefined,
+    foundRun: Number(r.found_run),
+    recheckedRun: r.rechecked_run === null ? null : Number(r.rechecked_run),
+    recheck: (r.recheck as 'fails' | 'holds' | null) ?? null,
+  };
+}
+
+function compareLengths(a: readonly number[], b: readonly number[]): number {
+  for (let i = 0; i < Math.min(a.length, b.length); i++) if (a[i] !== b[i]) return a[i]! - b[i]!;
+  return a.length - b.length;
+}
+
+/** Counterexamples of one claim in sweep order (size, then side lengths, then index). */
+export function listCounterexamples(db: Store, fingerprint: string): StoredCounterexample[] {
+  const rows = db.prepare('SELECT * FROM counterexamples WHERE fingerprint = ?').safeIntegers(true).all(fingerprint) as Record<string, unknown>[];
+  return rows
+    .map(fromRow)
+    .sort((a, b) => a.size - b.size || compareLengths(a.lengths, b.lengths) || a.classKey.localeCompare(b.classKey) || (a.index < b.index ? -1 : a.index > b.index ? 1 : 0));
+}
+
+/** Records the outcome of re-checking a stored counterexample at the start of a run. */
+export function recordRecheck(db: Store, fingerprint: string, classKey: string, index: bigint, runId: number, outcome: 'fails' | 'holds'): void {
+  db.prepare('UPDATE counterexamples SET rechecked_run = ?, recheck = ? WHERE fingerprint = ? AND class_key = ? AND instance_index = ?').run(
+    runId,
+    outcome,
+    fingerprint,
+    classKey,
+    index,
+  );
+}

@@ -1,0 +1,9 @@
+/** The SQLite results store: open it, then read and write through these record functions. */
+export * from './open-store.js';
+export * from './claim-records.js';
+export * from './run-records.js';
+export * from './chunk-records.js';
+export * from './chunk-completion.js';
+export * from './counterexample-records.js';
+export * from './verified-class-records.js';
+export * from './permutation-records.js';

@@ -1,0 +1,55 @@
+import { mkdirSync } from 'node:fs';
+import { dirname } from 'node:path';
+import Database from 'better-sqlite3';
+import { AppError } from '../errors.js';
+import { STORE_MIGRATIONS } from './store-migrations.js';
+
+/** An open store: the better-sqlite3 handle; every reader and writer in src/store takes it. */
+export type Store = Database.Database;
+
+/** Default store file, relative to the working directory. */
+export const DEFAULT_STORE_PATH = 'results/puzzlesweep.sqlite';
+
+function schemaVersion(db: Store): number {
+  db.exec('CREATE TABLE IF NOT EXISTS schema_version (version INTEGER NOT NULL, applied_at TEXT NOT NULL)');
+  const row = db.prepare('SELECT MAX(version) AS v FROM schema_version').get() as { v: number | null };
+  return row.v ?? 0;
+}
+
+function migrate(db: Store): void {
+  // IMMEDIATE takes the write lock first, so two processes opening a new store do not both migrate.
+  db.transaction(() => {
+    const current = schemaVersion(db);
+    if (current > STORE_MIGRATIONS.length) {
+      throw new AppError('store_error', `Store schema: expected version ≤ ${STORE_MIGRATIONS.length}, received ${current}`, {
+        hint: 'this store was written by a newer puzzlesweep; upgrade puzzlesweep or use another --db',
+      });
+    }
+    for (let v = current; v < STORE_MIGRATIONS.length; v++) {
+      db.exec(STORE_MIGRATIONS[v]!);
+      db.prepare('INSERT INTO schema_version (version, applied_at) VALUES (?, ?)').run(v + 1, new Date().toISOString());
+    }
+  }).immediate();
+}
+
+/** Opens (creating folder and file if needed) and migrates a store; `readonly` never creates anything. */
+export function openStore(path: string, options: { readonly?: boolean } = {}): Store {
+  let db: Store;
+  try {
+    if (!options.readonly) mkdirSync(dirname(path), { recursive: true });
+    db = new Database(path, { readonly: options.readonly ?? false, fileMustExist: options.readonly ?? false });
+  } catch (e) {
+    throw new AppError('store_error', `Store: expected a readable SQLite file, received '${path}' (${(e as Error).message})`, {
+      path: '--db',
+      hint: options.readonly ? 'run a sweep first, or point --db at an existing store' : 'check that the folder is writable',
+    });
+  }
+  db.pragma('busy_timeout = 10000');
+  db.pragma('foreign_keys = ON');
+  if (!options.readonly) {
+    db.pragma('journal_mode = WAL');
+    db.pragma('synchronous = NORMAL');
+    migrate(db);
+  }
+  return db;
+}

@@ -1,0 +1,99 @@
+/**
+ * The store's schema as an ordered list of migrations; `schema_version` records which ones ran.
+ * Never edit a shipped migration: append a new one, so older store files upgrade in place.
+ */
+export const STORE_MIGRATIONS: readonly string[] = [
+  `
+  CREATE TABLE claims (
+    fingerprint    TEXT PRIMARY KEY,
+    claim_id       TEXT NOT NULL,
+    canonical_json TEXT NOT NULL,
+    engine_version TEXT NOT NULL,
+    source_file    TEXT,
+    first_seen_at  TEXT NOT NULL
+  );
+  CREATE INDEX claims_by_id ON claims (claim_id);
+
+  CREATE TABLE runs (
+    run_id            INTEGER PRIMARY KEY AUTOINCREMENT,
+    fingerprint       TEXT NOT NULL REFERENCES claims (fingerprint),
+    started_at        TEXT NOT NULL,
+    ended_at          TEXT,
+    heartbeat_at      TEXT NOT NULL,
+    host              TEXT NOT NULL,
+    pid               INTEGER NOT NULL,
+    options_json      TEXT NOT NULL,
+    status            TEXT NOT NULL CHECK (status IN ('running', 'completed', 'interrupted', 'failed')),
+    stop_reason       TEXT,
+    instances_checked INTEGER NOT NULL DEFAULT 0,
+    holds             INTEGER NOT NULL DEFAULT 0,
+    counterexamples   INTEGER NOT NULL DEFAULT 0,
+    error_json        TEXT
+  );
+  CREATE INDEX runs_by_claim ON runs (fingerprint, run_id);
+
+  CREATE TABLE chunks (
+    chunk_id     INTEGER PRIMARY KEY AUTOINCREMENT,
+    fingerprint  TEXT NOT NULL REFERENCES claims (fingerprint),
+    class_key    TEXT NOT NULL,
+    method       TEXT NOT NULL CHECK (method IN ('exact', 'modular')),
+    start_index  INTEGER NOT NULL,
+    end_index    INTEGER NOT NULL CHECK (end_index > start_index),
+    state        TEXT NOT NULL CHECK (state IN ('leased', 'done')),
+    run_id       INTEGER NOT NULL REFERENCES runs (run_id),
+    checked      INTEGER NOT NULL DEFAULT 0,
+    holds        INTEGER NOT NULL DEFAULT 0,
+    fails        INTEGER NOT NULL DEFAULT 0,
+    skipped_zero INTEGER NOT NULL DEFAULT 0,
+    paired       INTEGER NOT NULL DEFAULT 0,
+    error_bound  REAL NOT NULL DEFAULT 0,
+    duration_ms  REAL,
+    finished_at  TEXT
+  );
+  CREATE INDEX chunks_by_range ON chunks (fingerprint, class_key, start_index);
+
+  CREATE TABLE counterexamples (
+    fingerprint     TEXT NOT NULL REFERENCES claims (fingerprint),
+    class_key       TEXT NOT NULL,
+    instance_index  INTEGER NOT NULL,
+    size            INTEGER NOT NULL,
+    lengths         TEXT NOT NULL,
+    left_theory     TEXT NOT NULL,
+    left_sides      TEXT NOT NULL,
+    left_value      TEXT NOT NULL,
+    left_json       TEXT NOT NULL,
+    right_theory    TEXT NOT NULL,
+    right_sides     TEXT NOT NULL,
+    right_value     TEXT NOT NULL,
+    right_json      TEXT NOT NULL,
+    permutation     TEXT,
+    confirmed_exact INTEGER NOT NULL CHECK (confirmed_exact = 1),
+    found_run       INTEGER NOT NULL REFERENCES runs (run_id),
+    rechecked_run   INTEGER REFERENCES runs (run_id),
+    recheck         TEXT CHECK (recheck IN ('fails', 'holds')),
+    PRIMARY KEY (fingerprint, class_key, instance_index)
+  );
+
+  CREATE TABLE verified_classes (
+    fingerprint  TEXT NOT NULL REFERENCES claims (fingerprint),
+    class_key    TEXT NOT NULL,
+    method       TEXT NOT NULL CHECK (method IN ('exact', 'modular')),
+    size         INTEGER NOT NULL,
+    lengths      TEXT NOT NULL,
+    variables    TEXT NOT NULL,
+    instances    INTEGER NOT NULL,
+    error_bound  REAL NOT NULL,
+    verified_run INTEGER NOT NULL REFERENCES runs (run_id),
+    verified_at  TEXT NOT NULL,
+    PRIMARY KEY (fingerprint, class_key, method)
+  );
+
+  CREATE TABLE permutations (
+    fingerprint    TEXT NOT NULL REFERENCES claims (fingerprint),
+    class_key      TEXT NOT NULL,
+    instance_index INTEGER NOT NULL,
+    permutation    TEXT NOT NULL,
+    PRIMARY KEY (fingerprint, class_key, instance_index)
+  );
+  `,
+];

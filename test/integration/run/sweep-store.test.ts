@@ -1,0 +1,132 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { parseRunOptions, type RunOptionsInput } from '../../../src/run/run-options.js';
+import { runSweep } from '../../../src/run/run-sweep.js';
+import { listCounterexamples, listRuns, listVerified, openStore } from '../../../src/store/index.js';
+import { FAKE_RUNTIME, fakeClaim } from '../../fixtures/fake-claim.js';
+
+const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-sweep-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+// Palindromic words of length n ≥ failFrom, listed by brute force over all 2^n words (the fake's rule).
+function expectedFailures(maxN: number, failFrom: number): string[] {
+  const out: string[] = [];
+  for (let n = failFrom; n <= maxN; n++) {
+    for (let i = 0; i < 2 ** n; i++) {
+      const w = i.toString(2).padStart(n, '0');
+      if (w === [...w].reverse().join('')) out.push(`n=${n}:${i}`);
+    }
+  }
+  return out;
+}
+
+function sweep(db: string, claim: ReturnType<typeof fakeClaim>, extra: Partial<RunOptionsInput> = {}, signal?: AbortSignal) {
+  return runSweep({ claims: [claim], options: parseRunOptions({ db, workers: 2, chunkSize: 16, ...extra }), runtimeModule: FAKE_RUNTIME, signal });
+}
+
+function storeState(db: string, fingerprint: string) {
+  const store = openStore(db);
+  try {
+    return {
+      verified: listVerified(store, fingerprint).map((v) => `${v.classKey}/${v.method}`),
+      counterexamples: listCounterexamples(store, fingerprint).map((c) => `${c.classKey}:${c.index}`),
+    };
+  } finally {
+    store.close();
+  }
+}
+
+describe('sweep runner and store (fake claims layer, real workers and SQLite)', () => {
+  const db = join(dir, 'main.sqlite');
+  const claim = fakeClaim({ maxN: 8, failFrom: 5 });
+
+  it('sweeps every class, stores exactly the failing instances and verifies the rest', async () => {
+    const summary = await sweep(db, claim);
+    expect(summary.exitCode).toBe(1);
+    const total = Array.from({ length: 8 }, (_, k) => 2 ** (k + 1)).reduce((a, b) => a + b);
+    expect(summary.claims[0]!.instancesChecked).toBe(total);
+    const state = storeState(db, claim.fingerprint);
+    expect(state.counterexamples.sort()).toEqual(expectedFailures(8, 5).sort());
+    expect(state.verified).toEqual(['n=1/modular', 'n=2/modular', 'n=3/modular', 'n=4/modular']);
+    expect(summary.claims[0]!.firstCounterexample?.replay).toContain("replay fake-claim --instance n=5:0");
+  });
+
+  it('resumes without redoing work, re-checks stored counterexamples first, and extends a raised bound', async () => {
+    const again = await sweep(db, claim);
+    expect(again.claims[0]!.instancesChecked).toBe(0);
+    expect(again.claims[0]!.rechecked).toEqual({ checked: expectedFailures(8, 5).length, stillFail: expectedFailures(8, 5).length, nowHold: 0 });
+    const raised = await sweep(db, claim, { max: ['n=9'] });
+    expect(raised.claims[0]!.instancesChecked).toBe(2 ** 9);
+    expect(storeState(db, claim.fingerprint).counterexamples.sort()).toEqual(expectedFailures(9, 5).sort());
+  });
+
+  it('never reuses results of a changed claim', async () => {
+    const changed = fakeClaim({ maxN: 8, failFrom: 6 });
+    const s = await sweep(db, changed);
+    expect(s.claims[0]!.instancesChecked).toBe(510);
+    expect(storeState(db, changed.fingerprint).counterexamples.sort()).toEqual(expectedFailures(8, 6).sort());
+  });
+
+  it('retries a chunk whose worker crashed and completes the run', async () => {
+    const crashDb = join(dir, 'crash.sqlite');
+    process.env.PUZZLESWEEP_TEST_CRASH = 'n=7:32';
+    try {
+      const s = await sweep(crashDb, claim);
+      expect(s.claims[0]!.status).toBe('completed');
+      expect(s.workerCrashes).toBe(1);
+    } finally {
+      delete process.env.PUZZLESWEEP_TEST_CRASH;
+    }
+    const state = storeState(crashDb, claim.fingerprint);
+    expect(state.verified).toEqual(['n=1/modular', 'n=2/modular', 'n=3/modular', 'n=4/modular']);
+    expect(state.counterexamples.sort()).toEqual(expectedFailures(8, 5).sort());
+  });
+
+  it('gives up with worker_crashed after the bounded retries and marks the run failed', async () => {
+    const failDb = join(dir, 'crash-always.sqlite');
+    process.env.PUZZLESWEEP_TEST_CRASH = 'n=3:0@99';
+    try {
+      await expect(sweep(failDb, claim)).rejects.toMatchObject({ code: 'worker_crashed' });
+    } finally {
+      delete process.env.PUZZLESWEEP_TEST_CRASH;
+    }
+    const store = openStore(failDb);
+    expect(listRuns(store, claim.fingerprint)[0]!.status).toBe('failed');
+    expect(listVerified(store, claim.fingerprint).map((v) => v.classKey)).not.toContain('n=3');
+    store.close();
+  });
+
+  it('stops after the smallest class with a counterexample under --stop-at-first', async () => {
+    const s = await sweep(join(dir, 'first.sqlite'), claim, { stopAtFirst: true });
+    const c = s.claims[0]!;
+    expect(c.stopReason).toBe('stop_at_first');
+    expect(c.classes.find((k) => k.key === 'n=5')!.state).toBe('counterexample');
+    expect(c.classes.find((k) => k.key === 'n=5')!.checked).toBe(32);
+    expect(c.counterexamples).toBe(expectedFailures(5, 5).length + (c.classes.find((k) => k.key === 'n=6')!.fails ?? 0));
+  });
+
+  it('an aborted run is interrupted, keeps finished chunks and verifies nothing it did not finish', async () => {
+    const abortDb = join(dir, 'abort.sqlite');
+    const ctl = new AbortController();
+    const slow = fakeClaim({ maxN: 10, failFrom: 99, spinMicros: 200 }, 'slow-claim');
+    const s = await runSweep({
+      claims: [slow],
+      options: parseRunOptions({ db: abortDb, workers: 2, chunkSize: 16 }),
+      runtimeModule: FAKE_RUNTIME,
+      signal: ctl.signal,
+      onProgress: (p) => {
+        if (p.checked >= 64) ctl.abort();
+      },
+    });
+    expect(s.exitCode).toBe(130);
+    expect(s.claims[0]!.status).toBe('interrupted');
+    const store = openStore(abortDb);
+    const chunks = store.prepare(`SELECT state, COUNT(*) AS n, SUM(checked) AS c FROM chunks GROUP BY state`).all() as { state: string; n: number; c: number }[];
+    store.close();
+    expect(chunks.map((r) => r.state)).toEqual(['done']);
+    expect(chunks[0]!.c).toBe(s.claims[0]!.instancesChecked);
+    expect(s.claims[0]!.instancesChecked).toBeLessThan(2 ** 11 - 2);
+  });
+});
