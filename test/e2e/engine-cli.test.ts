@@ -1,0 +1,80 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+
+const cli = (args: string[]) => spawnSync(process.execPath, ['dist/cli/main.js', ...args], { encoding: 'utf8' });
+
+beforeAll(() => {
+  execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { stdio: 'inherit' });
+});
+
+describe('puzzlesweep count', () => {
+  it('prints the stable JSON fields', () => {
+    const r = cli(['count', '--theory', 'equivariant', '--triangle', '10,10,10', '--json']);
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out).toMatchObject({ theory: 'equivariant', lengths: [2, 0, 2, 0, 2, 0], sides: ['10', '', '10', '', '01', ''], puzzles: '1' });
+    // c_{10,10}^{10} = y2 − y1 on Gr(1,2) [localization; Knutson–Tao, Duke 2003]
+    expect(out.value.terms).toHaveLength(2);
+    expect(out.value.terms).toEqual(
+      expect.arrayContaining([
+        { coefficient: '1', exponents: [0, 1] },
+        { coefficient: '-1', exponents: [1, 0] },
+      ]),
+    );
+  });
+
+  it('counts c_{21,21}^{321} = 2 given as sides [value from memory]', () => {
+    const r = cli(['count', '--theory', 'cohomology', '--sides', '010101,-,010101,-,010101,-', '--json']);
+    expect(JSON.parse(r.stdout).value).toBe('2');
+  });
+
+  it('counts the completed triangle with --completed', () => {
+    const r = cli(['count', '--theory', 'cohomology', '--sides', '01,1,01,1,01,1', '--completed', '--json']);
+    expect(r.status).toBe(0);
+    expect(JSON.parse(r.stdout)).toMatchObject({ region: 'completed', completion: { lengths: [4, 0, 4, 0, 4, 0] } });
+  });
+
+  it.each([
+    [['count', '--theory', 'cohomology', '--sides', '01,1,01,1,2,-'], 'invalid_region', '--sides'],
+    [['count', '--theory', 'cohomology', '--sides', '01,1,01,1,02,1'], 'invalid_boundary', '--sides[4]'],
+    [['count', '--theory', 'kohomology', '--triangle', '01,01,01'], 'unknown_theory', '--theory'],
+    [['count', '--theory', 'cohomology', '--triangle', '01,01'], 'invalid_argument', '--triangle'],
+  ])('rejects bad input with a coded error and exit 2: %j', (args, code, where) => {
+    const r = cli(args);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain(`[${code}]`);
+    expect(r.stderr).toContain(`→ at ${where}`);
+  });
+
+  it('reads a custom piece set and names the bad field of a broken one', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-'));
+    const file = join(dir, 'broken.json');
+    writeFileSync(file, JSON.stringify({ name: 'broken', boundaryLabels: ['0', '1'], pieces: [{ labels: ['0', '0', '0'], orientations: ['sideways'] }] }));
+    const r = cli(['count', '--theory', file, '--triangle', '01,01,01']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('[invalid_piece_set]');
+    expect(r.stderr).toContain('pieces[0].orientations[0]');
+  });
+});
+
+describe('puzzlesweep show and crosscheck', () => {
+  it('draws every puzzle: two for c_{21,21}^{321} [value from memory]', () => {
+    const r = cli(['show', '--theory', 'cohomology', '--triangle', '010101,010101,101010']);
+    expect(r.status).toBe(0);
+    expect(r.stdout.match(/^puzzle \d+$/gm)).toHaveLength(2);
+  });
+
+  it('exits 0 when engine and reference agree and 1 when a custom piece set disagrees', () => {
+    expect(cli(['crosscheck', '--theory', 'cohomology', '--max-n', '4']).status).toBe(0);
+    const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-'));
+    const file = join(dir, 'no-rhombi.json');
+    // without the 10-triangles only trivial products survive, so σ1·σ1 = σ2 + σ11 is missed [Pieri’s rule; Fulton 1997]
+    writeFileSync(file, JSON.stringify({ name: 'no-rhombi', boundaryLabels: ['0', '1'], pieces: [{ labels: ['0', '0', '0'], orientations: ['up', 'down'] }, { labels: ['1', '1', '1'], orientations: ['up', 'down'] }] }));
+    const r = cli(['crosscheck', '--theory', 'cohomology', '--max-n', '4', '--pieces', file]);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toContain('first disagreement');
+  });
+});
