@@ -98,8 +98,9 @@ function multiplyTruncated(a: TruncatedPoly, b: TruncatedPoly, enc: Encoding): T
 }
 
 /**
- * Expands G_λ·G_μ = Σ_ν c_{λμ}^ν G_ν in L variables for |ν| ≤ maxDegree: the lowest-degree part of the
- * remainder is a Schur-positive-or-not combination Σ c^ν s_ν whose lex-leading monomial x^ν carries c^ν.
+ * Expands G_λ·G_μ = Σ_ν c_{λμ}^ν G_ν in L variables for |ν| ≤ maxDegree (keys: ν's nonzero parts joined by
+ * ','): the lowest-degree part of the remainder is Σ c^ν s_ν, since G_ν = s_ν + higher terms, and its
+ * lex-leading monomial x^ν carries c^ν; subtracting c^ν G_ν and repeating peels off every term.
  */
 export function grothendieckProduct(
   lambda: readonly number[],
@@ -109,6 +110,9 @@ export function grothendieckProduct(
 ): Map<string, bigint> {
   if (!Number.isInteger(vars) || vars < 1) {
     throw new ReferenceComputationError('invalid_argument', `Variable count: expected a positive integer, received ${vars}`);
+  }
+  if (!Number.isInteger(maxDegree) || maxDegree < 0) {
+    throw new ReferenceComputationError('invalid_argument', `Maximum degree: expected a non-negative integer, received ${maxDegree}`);
   }
   const enc: Encoding = { vars, base: maxDegree + 1, maxDegree };
   const cache = new Map<string, TruncatedPoly>();

@@ -1,4 +1,4 @@
-import { bruhatLeq, checkGrassmannian, checkString, grassmannianStrings, inv } from './grassmannian-strings.js';
+import { checkGrassmannian, checkString, grassmannianStrings, inv } from './grassmannian-strings.js';
 import { RefPolynomial } from './ref-polynomial.js';
 
 // Conventions: the simple reflection s_i (1 ≤ i < n) swaps positions i, i+1 of a string and variables
@@ -134,7 +134,3 @@ export function localizationTable(k: number, n: number): Map<string, RefPolynomi
   return table;
 }
 
-/** Whether λ ≤ w, i.e. whether the fixed point w lies on X_λ (re-exported for callers of this module). */
-export function fixedPointOnSchubert(lambda: string, w: string): boolean {
-  return bruhatLeq(lambda, w);
-}

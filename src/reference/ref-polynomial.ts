@@ -63,8 +63,8 @@ export class RefPolynomial {
   /** c·y^exps. */
   static monomial(c: bigint, exps: readonly number[]): RefPolynomial {
     for (const e of exps) {
-      if (!Number.isInteger(e) || e < 0) {
-        throw new ReferenceComputationError('invalid_argument', `Exponent: expected a non-negative integer, received ${e}`);
+      if (!Number.isInteger(e) || e < 0 || e > 0xffff) {
+        throw new ReferenceComputationError('invalid_argument', `Exponent: expected an integer in [0, 65535], received ${e}`);
       }
     }
     const m = new Map<string, Monomial>();
