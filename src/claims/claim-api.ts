@@ -40,6 +40,15 @@ export interface InstanceResult {
   readonly right: Measured;
   /** For "equal up to some permutation": the permutation found (1-based images of y_1..y_N). */
   readonly permutation?: readonly number[];
+  /**
+   * For "equal up to some permutation": every permutation of the search space that works here (the first
+   * is `permutation`), so the runner can intersect them over a class to tell whether one serves all.
+   * `permutationsTruncated`: the list stopped at its cap (720), so an intersection is only a lower bound.
+   */
+  readonly permutations?: readonly (readonly number[])[];
+  readonly permutationsTruncated?: boolean;
+  /** For `paired`: the index of the partner T(b) inside the same class, which was checked instead. */
+  readonly partnerIndex?: bigint;
   /** `modular`: values compared by evaluation modulo primes; `errorBound` is the chance of a false "holds". */
   readonly method: 'exact' | 'modular';
   readonly errorBound?: number;

@@ -1,5 +1,5 @@
-import { isBuiltinTheory, theoryPieceSet, type PieceSet } from '../engine/index.js';
-import { AppError } from '../errors.js';
+import { isBuiltinTheory, makeRegion, theoryPieceSet, type PieceSet } from '../engine/index.js';
+import { AppError, toAppError } from '../errors.js';
 import { addAffine, boxCorners, constantAffine, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
 import { stepSideMap } from './boundary-transform.js';
 import type { Claim, TheoryInput } from './claim-schema.js';
@@ -103,11 +103,36 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
     );
   }
 
+  checkRegions(variables, lengths, fail);
   const { sameContent, counts } = compileConditions(claim, lengths, left, expr, cornerWhere, fail);
   const transformedLengths = checkTransform(claim, lengths, left, cornerWhere, fail);
   const polynomial = claim.compare.measure.type === 'value' && !(hasIntegerWeights(left) && hasIntegerWeights(right));
   checkCompare(claim, { left, right, polynomial, lengths, transformedLengths, expr, cornerWhere, fail });
   return { claim, left, right, variables, ranges, lengths, transformedLengths, sameContent, counts, polynomial };
+}
+
+// Area is not affine, so regions are built for every assignment (boxes are small in practice; capped).
+function checkRegions(variables: readonly { name: string; min: number; max: number }[], lengths: Affine[], fail: Fail): void {
+  let budget = 200_000;
+  const values: Record<string, number> = {};
+  const go = (k: number): void => {
+    if (budget-- <= 0) return;
+    if (k === variables.length) {
+      try {
+        makeRegion(lengths.map((l) => evalAffine(l, values)));
+      } catch (e) {
+        const err = toAppError(e);
+        fail(`${err.message} at ${valuesText(values)}`, 'family.sides', err.hint);
+      }
+      return;
+    }
+    const v = variables[k]!;
+    for (let x = v.min; x <= v.max; x++) {
+      values[v.name] = x;
+      go(k + 1);
+    }
+  };
+  go(0);
 }
 
 type CornerWhere = (pred: (v: Record<string, number>) => boolean) => Record<string, number> | undefined;

@@ -6,3 +6,4 @@ export { loadClaim, parseClaim } from './load-claim.js';
 export { claimFingerprint, canonicalClaimJson, ENGINE_VERSION } from './claim-fingerprint.js';
 export { planClaim, type ClaimPlanExt } from './plan-claim.js';
 export { applyTransform } from './boundary-transform.js';
+export { createEvaluator, type EvaluatorTuning } from './create-evaluator.js';

@@ -1,0 +1,88 @@
+import { DEFAULT_PRIMES, generatingSemiring, modularErrorBound, polyEquals, polyTerms, polyText, substitutePoly, toBigInt, type Polynomial } from '../engine/index.js';
+import type { Measured } from './claim-api.js';
+import type { Relation } from './claim-schema.js';
+import { NAMED_OFFSET, normalizedName, type Value } from './measure.js';
+import { allPermutations, blockReversals, type Permutation } from './substitution.js';
+
+/** Above this chance of a false "holds", a modular comparison is redone exactly. */
+export const MAX_MODULAR_ERROR = 1e-6;
+
+/** At most this many working permutations are listed per instance. */
+export const MAX_LISTED_PERMUTATIONS = 720;
+
+export function isZeroValue(v: Value): boolean {
+  if (v.kind === 'int') return toBigInt(v.v) === 0n;
+  if (v.kind === 'gen') return v.v.length === 0;
+  if (v.kind === 'poly') return v.v.size === 0;
+  return v.v.every((r) => r === 0);
+}
+
+function equalValues(a: Value, b: Value): boolean {
+  if (a.kind === 'int' && b.kind === 'int') return toBigInt(a.v) === toBigInt(b.v);
+  if (a.kind === 'gen' && b.kind === 'gen') return generatingSemiring.equals(a.v, b.v);
+  if (a.kind === 'poly' && b.kind === 'poly') return polyEquals(a.v, b.v);
+  if (a.kind === 'mod' && b.kind === 'mod') return a.v.every((r, k) => r === b.v[k]);
+  return false;
+}
+
+/** Chance that two modular values agree although the exact polynomials differ. */
+export function errorBoundOf(a: Value, b: Value): number {
+  if (a.kind !== 'mod' || b.kind !== 'mod') return 0;
+  return modularErrorBound(Math.max(a.degree, b.degree, 1), toBigInt(a.norm) + toBigInt(b.norm) + 1n, DEFAULT_PRIMES);
+}
+
+/** Whether `left relation right` holds (equality relations only see the already-substituted right value). */
+export function relationHolds(relation: Relation, left: Value, right: Value): boolean {
+  if (relation.type === 'lessOrEqual' || relation.type === 'greaterOrEqual') {
+    const [l, r] = [toBigInt((left as { v: number | bigint }).v), toBigInt((right as { v: number | bigint }).v)];
+    return relation.type === 'lessOrEqual' ? l <= r : l >= r;
+  }
+  return equalValues(left, right);
+}
+
+// Evaluation of a normalized polynomial at a point modulo a prime below 2^26 (products stay exact).
+const PRIME = DEFAULT_PRIMES[0]!;
+function evalMod(p: Polynomial, point: (k: number) => number): number {
+  let sum = 0;
+  for (const [key, c] of p) {
+    let t = Number(((c % BigInt(PRIME)) + BigInt(PRIME)) % BigInt(PRIME));
+    for (let k = 0; k < key.length; k++) for (let e = key.charCodeAt(k); e > 0; e--) t = (t * point(k)) % PRIME;
+    sum = (sum + t) % PRIME;
+  }
+  return sum;
+}
+
+/** Every permutation of the search space with left = σ(right), filtered at a random point, then confirmed exactly. */
+export function findPermutations(space: 'blockReversals' | 'allPermutations', m: number, left: Polynomial, right: Polynomial): { found: Permutation[]; truncated: boolean } {
+  const xs = Array.from({ length: NAMED_OFFSET + 64 }, (_, k) => (Math.imul(k + 1, 2654435761) >>> 0) % PRIME);
+  const target = evalMod(left, (k) => xs[k]!);
+  const found: Permutation[] = [];
+  let truncated = false;
+  for (const sigma of space === 'blockReversals' ? blockReversals(m) : allPermutations(m)) {
+    // σ(right) at x is right at the point whose k-th coordinate is x_σ(k).
+    if (evalMod(right, (k) => (k < m ? xs[sigma[k]! - 1]! : xs[k]!)) !== target) continue;
+    if (!polyEquals(left, substitutePoly(right, (k) => (k < m ? sigma[k]! - 1 : k)))) continue;
+    if (found.length >= MAX_LISTED_PERMUTATIONS) {
+      truncated = true;
+      break;
+    }
+    found.push(sigma);
+  }
+  return { found, truncated };
+}
+
+/** Printable and stable-JSON form of a value. */
+export function measured(theory: string, lengths: readonly number[], sides: readonly string[], v: Value, names: readonly string[]): Measured {
+  const base = { theory, lengths: [...lengths], sides: [...sides] };
+  if (v.kind === 'int') return { ...base, text: v.v.toString(), json: v.v.toString() };
+  if (v.kind === 'gen') return { ...base, text: generatingSemiring.toText(v.v), json: { distribution: v.v.map((c) => c.toString()) } };
+  if (v.kind === 'mod') return { ...base, text: `[${v.v.map((r, k) => `${r} mod ${DEFAULT_PRIMES[k]}`).join(', ')}]`, json: { residues: [...v.v], primes: [...DEFAULT_PRIMES] } };
+  // The same layout as the CLI's value JSON: y_1..y_n, then named variables, exponents as arrays.
+  let n = lengths[5]! + lengths[0]! + lengths[1]!;
+  for (const key of v.v.keys()) for (let k = 0; k < Math.min(key.length, NAMED_OFFSET); k++) if (key.charCodeAt(k) > 0) n = Math.max(n, k + 1);
+  const dense = substitutePoly(v.v, (k) => (k < NAMED_OFFSET ? k : n + k - NAMED_OFFSET));
+  const text = polyText(v.v, normalizedName(names));
+  const terms = polyTerms(dense, n + names.length).map((t) => ({ coefficient: t.coefficient.toString(), exponents: t.exponents }));
+  const variables = names.length ? { variables: [...Array.from({ length: n }, (_, k) => `y${k + 1}`), ...names] } : {};
+  return { ...base, text, json: { text, terms, ...variables } };
+}

@@ -1,0 +1,63 @@
+import { AppError } from '../errors.js';
+import { evalAffine, parseAffine, type Affine } from './affine.js';
+import type { SubstitutionStep } from './claim-schema.js';
+
+/** A permutation of y_1..y_M as 1-based images: y_m ↦ y_images[m−1]. */
+export type Permutation = readonly number[];
+
+function affine(e: number | string): Affine {
+  return parseAffine(e) as Affine;
+}
+
+/** σ for one class: the steps composed in order (σ = s_last ∘ … ∘ s_1), on y_1..y_m. */
+export function substitutionFor(steps: readonly SubstitutionStep[], values: Readonly<Record<string, number>>, m: number): Permutation {
+  let sigma = Array.from({ length: m }, (_, k) => k + 1);
+  steps.forEach((s, k) => {
+    const step = Array.from({ length: m }, (_, i) => i + 1);
+    if (s.type === 'explicit') s.images.forEach((img, i) => (step[i] = img));
+    else {
+      const from = evalAffine(affine(s.from), values);
+      const to = evalAffine(affine(s.to), values);
+      if (!(1 <= from && from <= to && to <= m)) {
+        throw new AppError('invalid_claim', `Substitution block: expected 1 ≤ from ≤ to ≤ ${m}, received from = ${from}, to = ${to}`, { path: `compare.relation.substitution[${k}]` });
+      }
+      const len = to - from + 1;
+      const by = s.type === 'shiftBlock' ? evalAffine(affine(s.by), values) : 0;
+      for (let i = from; i <= to; i++) step[i - 1] = s.type === 'reverseBlock' ? from + to - i : from + ((((i - from + by) % len) + len) % len);
+    }
+    if (step.length > m) throw new AppError('invalid_claim', `Images: expected at most ${m} entries, received ${step.length}`, { path: `compare.relation.substitution[${k}].images` });
+    sigma = sigma.map((x) => step[x - 1]!);
+  });
+  return sigma;
+}
+
+export function isInvolution(p: Permutation): boolean {
+  return p.every((x, i) => p[x - 1] === i + 1);
+}
+
+export function permutationKey(p: Permutation): string {
+  return p.join(',');
+}
+
+/** The search space of `equalUpToPermutation`: the identity, then every reversal of one block y_p..y_q. */
+export function* blockReversals(m: number): Generator<Permutation> {
+  yield Array.from({ length: m }, (_, k) => k + 1);
+  for (let p = 1; p <= m; p++) {
+    for (let q = p + 1; q <= m; q++) yield Array.from({ length: m }, (_, k) => (k + 1 >= p && k + 1 <= q ? p + q - k - 1 : k + 1));
+  }
+}
+
+/** All permutations of 1..m in lexicographic order. */
+export function* allPermutations(m: number): Generator<Permutation> {
+  const a = Array.from({ length: m }, (_, k) => k + 1);
+  for (;;) {
+    yield [...a];
+    let i = m - 2;
+    while (i >= 0 && a[i]! > a[i + 1]!) i--;
+    if (i < 0) return;
+    let j = m - 1;
+    while (a[j]! < a[i]!) j--;
+    [a[i], a[j]] = [a[j]!, a[i]!];
+    a.splice(i + 1, m - i - 1, ...a.slice(i + 1).reverse());
+  }
+}
