@@ -49,16 +49,16 @@ describe('multiset ranking', () => {
 
 describe('planClaim', () => {
   it('orders classes by total length, then by the side-length tuple', () => {
-    const plan = planClaim(claim({ sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 0, max: 3 }, { name: 'b', min: 0, max: 3 }] }));
+    const plan = planClaim(claim({ sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 4 }, { name: 'b', min: 1, max: 4 }] }));
     const classes = plan.classes();
     expect(classes.length).toBe(16);
     for (let k = 1; k < classes.length; k++) {
       const [p, q] = [classes[k - 1]!, classes[k]!];
       expect(p.size < q.size || (p.size === q.size && p.lengths.join(',') < q.lengths.join(','))).toBe(true);
     }
-    expect(classes[0]!.key).toBe('a=0,b=0');
-    expect(plan.classes({ a: 1, b: 1 }).map((c) => c.key)).toEqual(['a=0,b=0', 'a=0,b=1', 'a=1,b=0', 'a=1,b=1']);
-    expect(plan.classes({ a: 5 }).length).toBe(24);
+    expect(classes[0]!.key).toBe('a=1,b=1');
+    expect(plan.classes({ a: 2, b: 2 }).map((c) => c.key)).toEqual(['a=1,b=1', 'a=1,b=2', 'a=2,b=1', 'a=2,b=2']);
+    expect(plan.classes({ a: 5 }).length).toBe(20);
   });
 
   it('is a bijection onto all boundaries without conditions', () => {
