@@ -1,0 +1,33 @@
+/**
+ * `npm run bench`: runs every `*-benchmark.ts` module in this folder (each default-exports an async
+ * function returning a markdown section) and writes test/bench/results.md with the machine's details.
+ */
+import { readdirSync, writeFileSync } from 'node:fs';
+import { availableParallelism, cpus, totalmem } from 'node:os';
+import { dirname, join } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+
+const here = dirname(fileURLToPath(import.meta.url));
+const only = process.argv.slice(2);
+const modules = readdirSync(here)
+  .filter((f) => f.endsWith('-benchmark.ts'))
+  .filter((f) => only.length === 0 || only.some((o) => f.includes(o)))
+  .sort();
+
+const sections: string[] = [];
+for (const file of modules) {
+  process.stderr.write(`running ${file}\n`);
+  const mod = (await import(pathToFileURL(join(here, file)).href)) as { default: () => Promise<string> };
+  sections.push(await mod.default());
+}
+
+const header = [
+  '# Benchmark results',
+  '',
+  `Measured ${new Date().toISOString().slice(0, 10)} with \`npm run bench\` on ${availableParallelism()} cores (${cpus()[0]?.model ?? 'unknown CPU'}), ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}.`,
+  'Every number below was measured by that run; nothing is estimated. Peak memory is the maximum resident set size of a fresh process running only that case.',
+  '',
+].join('\n');
+const out = join(here, 'results.md');
+writeFileSync(out, `${header}\n${sections.join('\n\n')}\n`);
+process.stderr.write(`wrote ${out}\n`);
