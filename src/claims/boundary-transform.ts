@@ -16,9 +16,9 @@ export const IDENTITY_MAP: SideMap = [0, 1, 2, 3, 4, 5].map((from) => ({ from, r
 
 const COMPLEMENT: Readonly<Record<string, string>> = { '0': '1', '1': '0' };
 
-/** Indices of chosen sides, 0-based. */
-export function chosenSides(sides: 'all' | readonly number[]): number[] {
-  return sides === 'all' ? [0, 1, 2, 3, 4, 5] : [...new Set(sides)].map((s) => s - 1);
+/** Indices of chosen sides, 0-based; absent means all (the schema's default). */
+export function chosenSides(sides: 'all' | readonly number[] | undefined): number[] {
+  return sides === undefined || sides === 'all' ? [0, 1, 2, 3, 4, 5] : [...new Set(sides)].map((s) => s - 1);
 }
 
 /** The side map of one step; undefined for `completeToTriangle`, which is not a relabelling of sides. */
