@@ -4,11 +4,21 @@ import { hideBin } from 'yargs/helpers';
 import { countCommand } from './commands/count-command.js';
 import { crosscheckCommand } from './commands/crosscheck-command.js';
 import { showCommand } from './commands/show-command.js';
+import { runClaimsCommand } from './commands/run-claims-command.js';
+import { statusCommand } from './commands/status-command.js';
+import { counterexamplesCommand } from './commands/counterexamples-command.js';
+import { replayCommand } from './commands/replay-command.js';
+import { schemaCommand } from './commands/schema-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
   .command(countCommand)
   .command(showCommand)
+  .command(runClaimsCommand)
+  .command(statusCommand)
+  .command(counterexamplesCommand)
+  .command(replayCommand)
+  .command(schemaCommand)
   .command(crosscheckCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()

@@ -1,5 +1,5 @@
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
-import { listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store } from '../store/index.js';
+import { classCommonPermutations, listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store } from '../store/index.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 import type { RecheckOutcome } from './recheck-counterexamples.js';
 import { replayCommand, type ClaimSummary, type ClassSummary } from './sweep-summary.js';
@@ -39,6 +39,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
   for (const v of listVerified(i.db, i.claim.fingerprint)) if (!verified.has(v.classKey) || v.method === 'exact') verified.set(v.classKey, v);
   const classes: ClassSummary[] = i.classes.map((s) => {
     const v = verified.get(s.cls.key);
+    const perms = classCommonPermutations(i.db, i.claim.fingerprint, s.cls.key);
     return {
       key: s.cls.key,
       size: s.cls.size,
@@ -49,6 +50,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
       fails: s.fails,
       state: failing.has(s.cls.key) ? 'counterexample' : v ? 'verified' : 'incomplete',
       ...(v && !failing.has(s.cls.key) ? { method: v.method, errorBound: v.errorBound } : {}),
+      ...(perms ? { commonPermutations: perms } : {}),
     };
   });
   const first = counterexamples[0];

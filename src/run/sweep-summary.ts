@@ -15,6 +15,8 @@ export interface ClassSummary {
   readonly state: 'verified' | 'counterexample' | 'incomplete';
   readonly method?: SweepMethod | undefined;
   readonly errorBound?: number | undefined;
+  /** "Up to some permutation" claims: permutations that serve every instance swept in the class so far. */
+  readonly commonPermutations?: { readonly common: readonly (readonly number[])[]; readonly lowerBound: boolean } | undefined;
 }
 
 /** The first counterexample of a claim in sweep order, with a command that recomputes it. */

@@ -52,6 +52,8 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
   const out = { checked: 0, holds: 0, fails: 0, skippedZero: 0, paired: 0, overturned: 0, errorBound: 0, exact: true };
   const counterexamples: CounterexampleRecord[] = [];
   const permutations: { index: bigint; permutation: readonly number[] }[] = [];
+  let common: Map<string, readonly number[]> | undefined;
+  let truncated = false;
   for (let i = task.start; i < task.end; i++) {
     const instance: Instance = plan.instanceAt(cls, i);
     const r = evaluator.evaluate(instance);
@@ -71,10 +73,16 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
       out.holds++;
       if (r.method === 'modular') out.errorBound += r.errorBound ?? 0;
       if (r.permutation) permutations.push({ index: i, permutation: r.permutation });
+      if (r.permutations) {
+        const here = new Map(r.permutations.map((p) => [p.join(','), p]));
+        common = common ? new Map([...common].filter(([k]) => here.has(k))) : here;
+        truncated ||= r.permutationsTruncated === true;
+      }
     } else if (r.status === 'skipped_zero') out.skippedZero++;
     else out.paired++;
   }
-  return { ...out, durationMs: performance.now() - began, counterexamples, permutations };
+  const commonPermutations = common ? [...common.values()] : undefined;
+  return { ...out, durationMs: performance.now() - began, counterexamples, permutations, commonPermutations, permutationsTruncated: truncated };
 }
 
 function confirmAll(l: Loaded, task: ConfirmTask): WorkerReply {

@@ -43,6 +43,9 @@ export interface ChunkResult {
   readonly durationMs: number;
   readonly counterexamples: readonly CounterexampleRecord[];
   readonly permutations: readonly { readonly index: bigint; readonly permutation: readonly number[] }[];
+  /** Permutations serving every instance of the chunk that has a list; undefined when none searched. */
+  readonly commonPermutations?: readonly (readonly number[])[] | undefined;
+  readonly permutationsTruncated: boolean;
 }
 
 /** An error as it crosses the thread boundary: structured clone would drop the code and hint. */

@@ -14,9 +14,14 @@ export interface ChunkCompletion {
   readonly paired: number;
   /** Union bound on a false "holds" over the chunk's modular comparisons (0 when exact). */
   readonly errorBound: number;
+  /** Every comparison of the chunk was exact: it then counts for --exact runs too. */
+  readonly exact: boolean;
   readonly durationMs: number;
   readonly counterexamples: readonly CounterexampleRecord[];
   readonly permutations: readonly { readonly index: bigint; readonly permutation: readonly number[] }[];
+  /** Permutations that serve every instance of the chunk (undefined when the claim searches none). */
+  readonly commonPermutations?: readonly (readonly number[])[] | undefined;
+  readonly permutationsTruncated?: boolean | undefined;
 }
 
 /**
@@ -29,10 +34,10 @@ export function completeChunk(db: Store, c: ChunkCompletion): number {
     .transaction(() => {
       const updated = db
         .prepare(
-          `UPDATE chunks SET state = 'done', checked = ?, holds = ?, fails = ?, skipped_zero = ?, paired = ?, error_bound = ?,
-             duration_ms = ?, finished_at = ? WHERE chunk_id = ? AND run_id = ? AND state = 'leased'`,
+          `UPDATE chunks SET state = 'done', method = CASE WHEN ? THEN 'exact' ELSE method END, checked = ?, holds = ?, fails = ?, skipped_zero = ?, paired = ?, error_bound = ?,
+             duration_ms = ?, finished_at = ?, common_permutations = ?, permutations_truncated = ? WHERE chunk_id = ? AND run_id = ? AND state = 'leased'`,
         )
-        .run(c.checked, c.holds, c.fails, c.skippedZero, c.paired, c.errorBound, c.durationMs, new Date().toISOString(), c.chunkId, c.runId);
+        .run(c.exact ? 1 : 0, c.checked, c.holds, c.fails, c.skippedZero, c.paired, c.errorBound, c.durationMs, new Date().toISOString(), c.commonPermutations ? JSON.stringify(c.commonPermutations) : null, c.permutationsTruncated ? 1 : 0, c.chunkId, c.runId);
       if (updated.changes === 0) return -1;
       let added = 0;
       for (const ce of c.counterexamples) if (insertCounterexample(db, c.fingerprint, c.runId, ce)) added++;

@@ -9,3 +9,21 @@ export function permutationSummary(db: Store, fingerprint: string): { instances:
   const instances = rows.reduce((acc, r) => acc + r.n, 0);
   return { instances, distinct: rows.length, ...(rows.length === 1 ? { common: JSON.parse(rows[0]!.permutation) as number[] } : {}) };
 }
+
+/**
+ * Permutations serving every instance of a class, intersected over its finished chunks; `lowerBound`
+ * when some instance's list was truncated (then more permutations may serve all).
+ */
+export function classCommonPermutations(db: Store, fingerprint: string, classKey: string): { common: number[][]; lowerBound: boolean } | undefined {
+  const rows = db
+    .prepare(`SELECT common_permutations AS c, permutations_truncated AS t FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'done' AND common_permutations IS NOT NULL`)
+    .all(fingerprint, classKey) as { c: string; t: number }[];
+  if (rows.length === 0) return undefined;
+  let common: Map<string, number[]> | undefined;
+  for (const r of rows) {
+    const list = JSON.parse(r.c) as number[][];
+    const here = new Map(list.map((p) => [p.join(','), p]));
+    common = common ? new Map([...common].filter(([k]) => here.has(k))) : here;
+  }
+  return { common: [...common!.values()], lowerBound: rows.some((r) => r.t === 1) };
+}

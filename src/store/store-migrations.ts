@@ -96,4 +96,9 @@ export const STORE_MIGRATIONS: readonly string[] = [
     PRIMARY KEY (fingerprint, class_key, instance_index)
   );
   `,
+  // 2: per chunk, the permutations that serve every instance of the chunk (JSON list of lists; NULL when not searched).
+  `
+  ALTER TABLE chunks ADD COLUMN common_permutations TEXT;
+  ALTER TABLE chunks ADD COLUMN permutations_truncated INTEGER NOT NULL DEFAULT 0;
+  `,
 ];

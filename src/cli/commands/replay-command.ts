@@ -1,0 +1,121 @@
+import { existsSync } from 'node:fs';
+import type { CommandModule } from 'yargs';
+import { createEvaluator, parseClaim, planClaim, type ClaimPlanExt } from '../../claims/index.js';
+import type { Instance, Measured } from '../../claims/claim-api.js';
+import { enumeratePuzzles, makeRegion, type PieceSet } from '../../engine/index.js';
+import { AppError, toAppError } from '../../errors.js';
+import { drawPuzzleText } from '../../report/text-drawing.js';
+import { loadSweepClaim } from '../../run/load-sweep-claim.js';
+import { parseRunOptions } from '../../run/run-options.js';
+import { DEFAULT_STORE_PATH } from '../../store/index.js';
+import { parseBoundaryArgs } from '../boundary-args.js';
+import { runCommand } from '../run-command.js';
+import { openExistingStore, storedClaims } from '../stored-claims.js';
+import { summaryJson } from '../sweep-summary-text.js';
+
+interface ReplayArgs {
+  claim: string;
+  instance?: string;
+  sides?: string;
+  max?: string[];
+  db: string;
+  limit: number;
+  json: boolean;
+}
+
+/** The canonical JSON of the claim: from its file, or from the store when given an id or fingerprint. */
+function claimJson(ref: string, db: string): { id: string; json: string } {
+  if (existsSync(ref)) {
+    const c = loadSweepClaim(ref);
+    return { id: c.id, json: c.canonicalJson };
+  }
+  const store = openExistingStore(db);
+  try {
+    const c = storedClaims(store, ref).claims[0]!;
+    return { id: c.claimId, json: c.canonicalJson };
+  } finally {
+    store.close();
+  }
+}
+
+function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
+  if ((args.instance === undefined) === (args.sides === undefined)) {
+    throw new AppError('invalid_argument', `Instance: expected exactly one of --instance or --sides, received ${args.instance === undefined ? 'neither' : 'both'}`, {
+      path: '--instance / --sides',
+      hint: "copy the replay command a run prints, e.g. --instance 'n=3:17'",
+    });
+  }
+  if (args.instance !== undefined) {
+    const at = args.instance.lastIndexOf(':');
+    const index = args.instance.slice(at + 1);
+    if (at < 0 || !/^\d+$/.test(index)) {
+      throw new AppError('invalid_argument', `--instance: expected <class key>:<index> such as 'n=3:17', received '${args.instance}'`, { path: '--instance' });
+    }
+    return plan.instanceAt(plan.classForKey(args.instance.slice(0, at)), BigInt(index));
+  }
+  const sides = parseBoundaryArgs({ sides: args.sides });
+  const lengths = sides.map((s) => [...s].length);
+  const max = parseRunOptions({ max: args.max ?? [] }).max;
+  for (const cls of plan.classes(max)) {
+    if (cls.lengths.some((l, i) => l !== lengths[i])) continue;
+    const index = plan.indexOf(cls, sides);
+    if (index !== undefined) return plan.instanceAt(cls, index);
+  }
+  throw new AppError('invalid_argument', `--sides: expected a boundary of the claim's family, received side lengths ${lengths.join(',')}`, {
+    path: '--sides',
+    hint: 'check the content conditions of the family, or raise a bound with --max var=value',
+  });
+}
+
+function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number): string[] {
+  const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${m.text}`];
+  let shown = 0;
+  try {
+    for (const puzzle of enumeratePuzzles(makeRegion(m.lengths), m.sides, pieces)) {
+      if (shown === limit) {
+        lines.push(`  … more puzzles not drawn (raise --limit)`);
+        break;
+      }
+      shown++;
+      lines.push(`  puzzle ${shown}`, ...drawPuzzleText(puzzle).split('\n').map((l) => `    ${l}`));
+    }
+  } catch (e) {
+    throw toAppError(e);
+  }
+  if (shown === 0) lines.push('  no puzzles');
+  return lines;
+}
+
+export const replayCommand: CommandModule<object, ReplayArgs> = {
+  command: 'replay <claim>',
+  describe: 'Recompute one instance of a claim exactly: both boundaries, both values and their puzzles',
+  builder: (y) =>
+    y
+      .positional('claim', { type: 'string', describe: 'claim file, or a stored claim id or fingerprint' })
+      .option('instance', { type: 'string', describe: "<class key>:<index>, e.g. 'n=3:17' (as a run prints it)" })
+      .option('sides', { type: 'string', describe: "or the six clockwise side strings s1,…,s6 (empty side '-')" })
+      .option('max', { type: 'string', array: true, describe: 'with --sides: raised bounds to search, e.g. --max n=6' })
+      .option('db', { type: 'string', default: DEFAULT_STORE_PATH, describe: 'store to read the claim from when given an id' })
+      .option('limit', { type: 'number', default: 10, describe: 'draw at most this many puzzles per boundary' })
+      .option('json', { type: 'boolean', default: false, describe: 'print one JSON object (no drawings)' }) as never,
+  handler: (args) =>
+    runCommand(args.json, () => {
+      const { id, json } = claimJson(args.claim, args.db);
+      const claim = parseClaim(JSON.parse(json) as unknown);
+      const plan = planClaim(claim);
+      const instance = findInstance(plan, args);
+      const r = createEvaluator(claim, { exact: true }).confirm(instance);
+      if (args.json) {
+        process.stdout.write(`${summaryJson({ claimId: id, instance: `${instance.classKey}:${instance.index}`, ...r })}\n`);
+        return r.status === 'fails' ? 1 : 0;
+      }
+      const lines = [
+        `claim ${id}, instance ${instance.classKey}:${instance.index}: ${r.status}${r.status === 'fails' ? ' (counterexample)' : ''} [exact]`,
+        ...(r.permutation ? [`permutation: [${r.permutation.join(',')}]`] : []),
+        ...measuredText('left', r.left, plan.compiled.left, args.limit),
+        ...measuredText('right', r.right, plan.compiled.right, args.limit),
+      ];
+      process.stdout.write(`${lines.join('\n')}\n`);
+      return r.status === 'fails' ? 1 : 0;
+    }),
+};

@@ -1,0 +1,83 @@
+import type { CommandModule } from 'yargs';
+import { loadSweepClaim } from '../../run/load-sweep-claim.js';
+import { parseRunOptions } from '../../run/run-options.js';
+import { runSweep } from '../../run/run-sweep.js';
+import { DEFAULT_STORE_PATH } from '../../store/index.js';
+import { runCommand } from '../run-command.js';
+import { sweepProgressBar } from '../sweep-progress-bar.js';
+import { summaryJson, sweepSummaryText } from '../sweep-summary-text.js';
+
+interface RunArgs {
+  claims: string[];
+  max?: string[];
+  workers?: number;
+  db: string;
+  'stop-at-first': boolean;
+  'max-counterexamples'?: number;
+  'time-limit'?: number;
+  exact: boolean;
+  json: boolean;
+  'chunk-size'?: number;
+}
+
+/** Ctrl-C / SIGTERM abort the sweep once (finished chunks are kept); a second one exits at once. */
+function interruptSignal(): { signal: AbortSignal; dispose: () => void } {
+  const ctl = new AbortController();
+  const handler = () => {
+    if (ctl.signal.aborted) process.exit(130);
+    ctl.abort();
+  };
+  process.on('SIGINT', handler);
+  process.on('SIGTERM', handler);
+  return {
+    signal: ctl.signal,
+    dispose: () => {
+      process.off('SIGINT', handler);
+      process.off('SIGTERM', handler);
+    },
+  };
+}
+
+export const runClaimsCommand: CommandModule<object, RunArgs> = {
+  command: 'run <claims..>',
+  describe: 'Sweep claim files over every boundary of their families, storing results as they finish',
+  builder: (y) =>
+    y
+      .positional('claims', { type: 'string', array: true, describe: 'claim JSON files' })
+      .option('max', { type: 'string', array: true, describe: "raise a variable's upper bound, e.g. --max n=5 (repeatable)" })
+      .option('workers', { type: 'number', describe: 'worker threads (default: available parallelism)' })
+      .option('db', { type: 'string', default: DEFAULT_STORE_PATH, describe: 'SQLite store file (folder created if needed)' })
+      .option('stop-at-first', { type: 'boolean', default: false, describe: 'finish the smallest class with a counterexample, then stop' })
+      .option('max-counterexamples', { type: 'number', describe: 'stop handing out work once this many counterexamples are stored' })
+      .option('time-limit', { type: 'number', describe: 'stop handing out work after this many seconds' })
+      .option('exact', { type: 'boolean', default: false, describe: 'exact polynomials instead of modular identity tests' })
+      .option('json', { type: 'boolean', default: false, describe: 'print the summary as one JSON object, no progress bar' })
+      .option('chunk-size', { type: 'number', describe: 'instances per chunk (the unit of resume; default 500)' }) as never,
+  handler: (args) =>
+    runCommand(args.json, async () => {
+      const options = parseRunOptions({
+        max: args.max ?? [],
+        ...(args.workers !== undefined ? { workers: args.workers } : {}),
+        db: args.db,
+        stopAtFirst: args['stop-at-first'],
+        ...(args['max-counterexamples'] !== undefined ? { maxCounterexamples: args['max-counterexamples'] } : {}),
+        ...(args['time-limit'] !== undefined ? { timeLimit: args['time-limit'] } : {}),
+        exact: args.exact,
+        json: args.json,
+        ...(args['chunk-size'] !== undefined ? { chunkSize: args['chunk-size'] } : {}),
+      });
+      // Every claim is validated before the store is opened, so bad input never touches it.
+      const claims = args.claims.map((file) => loadSweepClaim(file));
+      const bar = sweepProgressBar(!options.json);
+      const interrupt = interruptSignal();
+      try {
+        const summary = await runSweep({ claims, options, signal: interrupt.signal, onProgress: bar.onProgress });
+        bar.stop();
+        process.stdout.write(`${options.json ? summaryJson(summary) : sweepSummaryText(summary)}\n`);
+        return summary.exitCode;
+      } finally {
+        bar.stop();
+        interrupt.dispose();
+      }
+    }),
+};

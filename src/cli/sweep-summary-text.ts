@@ -1,0 +1,54 @@
+import type { ClaimSummary, SweepSummary } from '../run/sweep-summary.js';
+
+const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
+
+function claimText(c: ClaimSummary): string[] {
+  const lines = [
+    `claim ${c.claimId} (${c.fingerprint.slice(0, 12)}), run ${c.runId}: ${c.status}${c.stopReason === 'finished' ? '' : ` (${c.stopReason.replace(/_/g, ' ')})`}`,
+    `  checked ${c.instancesChecked} instances in ${seconds(c.elapsedMs)}: ${c.holds} hold, ${c.newCounterexamples} new counterexamples` +
+      (c.skippedZero ? `, ${c.skippedZero} skipped (value 0)` : '') +
+      (c.paired ? `, ${c.paired} covered by their involution partner` : ''),
+  ];
+  if (c.method === 'modular' && c.instancesChecked > 0) lines.push(`  modular comparisons: chance of a false "holds" ≤ ${c.errorBound.toExponential(2)} (use --exact to avoid)`);
+  if (c.rechecked.checked) lines.push(`  re-checked ${c.rechecked.checked} stored counterexamples: ${c.rechecked.stillFail} still fail${c.rechecked.nowHold ? `, ${c.rechecked.nowHold} NOW HOLD (stored result doubtful)` : ''}`);
+  if (c.overturned) lines.push(`  ${c.overturned} modular "fails" were overturned by exact recomputation`);
+  lines.push('  classes:');
+  for (const k of c.classes) {
+    const state = k.state === 'verified' ? `verified (${k.method}${k.method === 'modular' ? `, error ≤ ${k.errorBound?.toExponential(1)}` : ''})` : k.state;
+    const perms = k.commonPermutations
+      ? `  one permutation for all: ${k.commonPermutations.common.length ? k.commonPermutations.common.slice(0, 3).map((p) => `[${p.join(',')}]`).join(' ') : 'none'}${k.commonPermutations.lowerBound ? ' (lists truncated)' : ''}`
+      : '';
+    lines.push(`    ${k.key.padEnd(16)} sides ${k.lengths.join(',').padEnd(14)} ${k.instances.padStart(9)} instances  ${state}${k.checked ? `  (${k.checked} checked now, ${k.fails} fail)` : ''}${perms}`);
+  }
+  if (c.permutations) {
+    lines.push(
+      `  permutations found for ${c.permutations.instances} instances: ${c.permutations.distinct === 1 ? `one serves all: [${c.permutations.common!.join(',')}]` : `${c.permutations.distinct} different ones`}`,
+    );
+  }
+  if (c.counterexamples) lines.push(`  ${c.counterexamples} counterexamples stored`);
+  const f = c.firstCounterexample;
+  if (f) {
+    lines.push(
+      `  first counterexample: class ${f.classKey}, index ${f.index}`,
+      `    left  (${f.left.theory}) sides ${f.left.sides.map((s) => s || '-').join(' | ')}: ${f.left.text}`,
+      `    right (${f.right.theory}) sides ${f.right.sides.map((s) => s || '-').join(' | ')}: ${f.right.text}`,
+      `    replay: ${f.replay}`,
+    );
+  }
+  return lines;
+}
+
+/** The human-readable end-of-run summary. */
+export function sweepSummaryText(s: SweepSummary): string {
+  const verdict = s.interrupted
+    ? 'interrupted: finished chunks are stored; run the same command again to resume'
+    : s.exitCode === 1
+      ? 'a counterexample is known'
+      : 'holds on everything swept';
+  return [...s.claims.flatMap(claimText), `store: ${s.db}`, `result: ${verdict} (${seconds(s.elapsedMs)})`].join('\n');
+}
+
+/** JSON text of any summary: bigints become decimal strings. */
+export function summaryJson(value: unknown): string {
+  return JSON.stringify(value, (_k, v: unknown) => (typeof v === 'bigint' ? v.toString() : v));
+}
