@@ -7,6 +7,11 @@ export interface Semiring<T> {
   readonly zero: T;
   readonly one: T;
   add(a: T, b: T): T;
+  /**
+   * Optional: adds `b` into `acc` and returns it, mutating `acc`. Sweeps call it only on values they
+   * created themselves, so big values (polynomials) are not copied once per contribution.
+   */
+  addInPlace?(acc: T, b: T): T;
   mul(a: T, b: T): T;
   isZero(a: T): boolean;
   equals(a: T, b: T): boolean;

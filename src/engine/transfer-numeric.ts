@@ -42,17 +42,29 @@ export function sweepNumeric<T>(plan: TransferPlan, semiring: Semiring<T>, weigh
   for (let i = plan.initial.length - 1; i >= 0; i--) initial = initial * a + plan.initial.charCodeAt(i);
   let state = new Map<number, T>([[initial, semiring.one]]);
   const { add, mul, isZero } = semiring;
-  const put = (next: Map<number, T>, key: number, v: T) => {
+  const addInPlace = semiring.addInPlace?.bind(semiring);
+  // Values this step allocated itself (sums), which may therefore be added into in place; a value
+  // passed through unchanged may be shared by several states and is copied on its first sum.
+  let owned = new Set<T>();
+  const put = (next: Map<number, T>, key: number, v: T, fresh: boolean) => {
     const old = next.get(key);
-    if (old === undefined) next.set(key, v);
-    else {
-      const sum = add(old, v);
+    if (old === undefined) {
+      next.set(key, v);
+      if (fresh && addInPlace) owned.add(v);
+    } else {
+      let sum: T;
+      if (addInPlace && owned.has(old)) sum = addInPlace(old, v);
+      else {
+        sum = add(old, v);
+        if (addInPlace && sum !== old && sum !== v) owned.add(sum);
+      }
       if (isZero(sum)) next.delete(key);
       else next.set(key, sum);
     }
   };
   plan.steps.forEach((step, s) => {
     const next = new Map<number, T>();
+    owned = new Set<T>();
     const row = weights[s]!;
     if (step.type === 'start') {
       for (const [p, v] of state) next.set(step.label + a * p, v);
@@ -70,7 +82,7 @@ export function sweepNumeric<T>(plan: TransferPlan, semiring: Semiring<T>, weigh
             if (step.bottom !== null && o.bottom !== step.bottom) continue;
             const e = row[o.piece]!;
             const v = e.isOne ? value : mul(value, e.w);
-            if (!isZero(v)) put(next, o.right + a * (low + unit * (o.bottom + a * high)), v);
+            if (!isZero(v)) put(next, o.right + a * (low + unit * (o.bottom + a * high)), v, !e.isOne);
           }
         } else {
           const top = high % a;
@@ -78,7 +90,7 @@ export function sweepNumeric<T>(plan: TransferPlan, semiring: Semiring<T>, weigh
           for (const o of plan.downByTopLeft[top * a + slant]!) {
             const e = row[o.piece]!;
             const v = e.isOne ? value : mul(value, e.w);
-            if (!isZero(v)) put(next, o.right + a * rest, v);
+            if (!isZero(v)) put(next, o.right + a * rest, v, !e.isOne);
           }
         }
       }

@@ -69,6 +69,14 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
       }
       return r;
     },
+    addInPlace: (acc, b) => {
+      const r = acc as number[];
+      for (let k = 0; k < m; k++) {
+        const s = r[k]! + b[k]!;
+        r[k] = s >= primes[k]! ? s - primes[k]! : s;
+      }
+      return r;
+    },
     mul: (a, b) => {
       const r = new Array<number>(m);
       for (let k = 0; k < m; k++) r[k] = (a[k]! * b[k]!) % primes[k]!;

@@ -1,5 +1,5 @@
 import type { Semiring } from '../semiring.js';
-import { addPoly, constantPoly, mulPoly, ONE_POLY, polyEquals, polyText, subPoly, variablePoly, ZERO_POLY, type Polynomial } from './polynomial.js';
+import { addPoly, addPolyInPlace, constantPoly, mulPoly, ONE_POLY, polyEquals, polyText, subPoly, variablePoly, ZERO_POLY, type Polynomial } from './polynomial.js';
 
 export interface PolynomialSemiring extends Semiring<Polynomial> {
   /** Number of equivariant variables y_1..y_N (variables 0..N−1); named variables follow. */
@@ -21,6 +21,7 @@ export function polynomialSemiring(size: number): PolynomialSemiring {
     zero: ZERO_POLY,
     one: ONE_POLY,
     add: addPoly,
+    addInPlace: addPolyInPlace,
     mul: mulPoly,
     isZero: (a) => a.size === 0,
     equals: polyEquals,

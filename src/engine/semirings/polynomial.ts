@@ -43,6 +43,13 @@ export function addPoly(a: Polynomial, b: Polynomial): Polynomial {
   return acc;
 }
 
+/** `acc += b`, mutating `acc` (which must not be shared); returns `acc`. */
+export function addPolyInPlace(acc: Polynomial, b: Polynomial): Polynomial {
+  const m = acc as Map<string, bigint>;
+  for (const [k, c] of b) addInto(m, k, c);
+  return m;
+}
+
 export function subPoly(a: Polynomial, b: Polynomial): Polynomial {
   return addPoly(a, scalePoly(b, -1n));
 }
