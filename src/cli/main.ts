@@ -9,6 +9,7 @@ import { statusCommand } from './commands/status-command.js';
 import { counterexamplesCommand } from './commands/counterexamples-command.js';
 import { replayCommand } from './commands/replay-command.js';
 import { schemaCommand } from './commands/schema-command.js';
+import { demoCommand } from './commands/demo-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
@@ -19,6 +20,7 @@ await yargs(hideBin(process.argv))
   .command(counterexamplesCommand)
   .command(replayCommand)
   .command(schemaCommand)
+  .command(demoCommand)
   .command(crosscheckCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()

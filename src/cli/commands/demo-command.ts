@@ -1,0 +1,47 @@
+import { readdirSync, rmSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { join, relative } from 'node:path';
+import type { CommandModule } from 'yargs';
+import { loadSweepClaim } from '../../run/load-sweep-claim.js';
+import { parseRunOptions } from '../../run/run-options.js';
+import { runSweep } from '../../run/run-sweep.js';
+import { runCommand } from '../run-command.js';
+import { sweepProgressBar } from '../sweep-progress-bar.js';
+import { sweepSummaryText } from '../sweep-summary-text.js';
+
+/** The demo's own store; it is rebuilt on every demo so the demo always shows a full sweep. */
+export const DEMO_STORE = 'results/demo.sqlite';
+
+// dist/cli/commands/ → the package root, where conjectures/ ships.
+const conjecturesDir = fileURLToPath(new URL('../../../conjectures/', import.meta.url));
+
+export const demoCommand: CommandModule<object, { workers?: number }> = {
+  command: 'demo',
+  describe: `Sweep the shipped conjectures into ${DEMO_STORE} (under a minute) and say where the results are`,
+  builder: (y) => y.option('workers', { type: 'number', describe: 'worker threads (default: available parallelism)' }) as never,
+  handler: (args) =>
+    runCommand(false, async () => {
+      const files = readdirSync(conjecturesDir).filter((f) => f.endsWith('.json')).sort();
+      const claims = files.map((f) => loadSweepClaim(relative(process.cwd(), join(conjecturesDir, f)) || f));
+      for (const suffix of ['', '-wal', '-shm']) rmSync(`${DEMO_STORE}${suffix}`, { force: true });
+      const options = parseRunOptions({ db: DEMO_STORE, timeLimit: 50, ...(args.workers !== undefined ? { workers: args.workers } : {}) });
+      process.stdout.write(`sweeping ${claims.length} claims from ${relative(process.cwd(), conjecturesDir) || conjecturesDir}/ …\n`);
+      const bar = sweepProgressBar(true);
+      const summary = await runSweep({ claims, options, onProgress: bar.onProgress });
+      bar.stop();
+      const failing = summary.claims.filter((c) => c.counterexamples > 0).map((c) => c.claimId);
+      process.stdout.write(
+        [
+          sweepSummaryText(summary),
+          '',
+          `The results are in the SQLite store ${DEMO_STORE}. Look at them with`,
+          `  node dist/cli/main.js status --db ${DEMO_STORE}`,
+          ...failing.map((id) => `  node dist/cli/main.js counterexamples ${id} --db ${DEMO_STORE} --smallest`),
+          `or with any SQLite client (tables are described in README.md, "The store").`,
+          '',
+        ].join('\n'),
+      );
+      // The demo ships a claim that is false on purpose, so finding its counterexample is success.
+      return summary.exitCode === 130 ? 130 : 0;
+    }),
+};
