@@ -1,0 +1,66 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync, existsSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { enumeratePuzzles, structureConstantSides, theoryPieceSet, triangleRegion, makeRegion } from '../../../src/engine/index.js';
+import { drawPuzzlesTikz, texText } from '../../../src/report/tikz-drawing.js';
+
+// Three equivariant puzzles for λ=1001, μ=0110, ν=1010 in Gr(2,4), and a hexagon: small inputs chosen so
+// that several pictures and a rhombus appear (common practice, no source).
+const equivariant = theoryPieceSet('equivariant');
+const triangle = [...enumeratePuzzles(triangleRegion(4), structureConstantSides('1001', '0110', '1010'), equivariant)];
+const hexagon = [...enumeratePuzzles(makeRegion([2, 1, 2, 1, 2, 1]), ['01', '1', '01', '1', '01', '1'], equivariant)];
+
+function environments(tex: string): string[] {
+  const stack: string[] = [];
+  const seen: string[] = [];
+  for (const m of tex.matchAll(/\\(begin|end)\{([^}]+)\}/g)) {
+    if (m[1] === 'begin') stack.push(m[2]!), seen.push(m[2]!);
+    else if (stack.pop() !== m[2]) throw new Error(`unbalanced \\end{${m[2]}}`);
+  }
+  if (stack.length) throw new Error(`unclosed ${stack.join(', ')}`);
+  return seen;
+}
+
+function bracesBalanced(tex: string): boolean {
+  let depth = 0;
+  for (const c of tex.replace(/\\[{}$]/g, '')) {
+    if (c === '{') depth++;
+    if (c === '}' && --depth < 0) return false;
+  }
+  return depth === 0;
+}
+
+describe('drawPuzzlesTikz', () => {
+  it('writes one tikzpicture per puzzle and one fill per unit triangle, in balanced environments', () => {
+    expect(triangle.length).toBeGreaterThan(1);
+    const tex = drawPuzzlesTikz(triangle, { title: 'c_{λμ}^ν & more | 100%' });
+    const envs = environments(tex);
+    expect(envs.filter((e) => e === 'tikzpicture').length).toBe(triangle.length);
+    expect(envs[0]).toBe('document');
+    expect(bracesBalanced(tex)).toBe(true);
+    // A triangle of side 4 has 4² = 16 unit triangles (elementary geometry, common practice, no source).
+    expect((tex.match(/^\\fill\[/gm) ?? []).length).toBe(16 * triangle.length);
+    expect(tex.indexOf('\\tikzset')).toBeLessThan(tex.indexOf('\\begin{document}'));
+    expect(tex).toMatch(/\$y_\{\d+\} - y_\{\d+\}\$/);
+  });
+
+  it('escapes LaTeX specials in plain text', () => {
+    // The escapes are the standard LaTeX spellings (Lamport, LaTeX: A Document Preparation System, 1994).
+    expect(texText('a_b & 50% #1 {x}')).toBe('a\\_b \\& 50\\% \\#1 \\{x\\}');
+    expect(texText('1 – 2')).toBe('1 -- 2');
+  });
+
+  const pdflatex = spawnSync('pdflatex', ['--version']).status === 0;
+  it.skipIf(!pdflatex)('compiles with pdflatex', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-tikz-'));
+    try {
+      writeFileSync(join(dir, 'p.tex'), drawPuzzlesTikz([...triangle, ...hexagon], { title: 'equivariant: 1001 | – | 0110' }));
+      execFileSync('pdflatex', ['-interaction=nonstopmode', '-halt-on-error', 'p.tex'], { cwd: dir, stdio: 'pipe', timeout: 120_000 });
+      expect(existsSync(join(dir, 'p.pdf'))).toBe(true);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+});
