@@ -1,0 +1,83 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { cli, cliAsync, query } from './cli-process.js';
+
+const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-kill-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+const CLAIM = 'conjectures/k-theory-equals-cohomology.json';
+const ARGS = [CLAIM, '--max', 'n=5', '--workers', '2', '--chunk-size', '16', '--json'];
+
+// The parts of a store that must not depend on how the sweep was cut: verified classes and counterexamples.
+function outcome(db: string) {
+  return {
+    verified: query<{ k: string }>(db, 'SELECT class_key || \'/\' || method AS k FROM verified_classes ORDER BY k').map((r) => r.k),
+    counterexamples: query<{ k: string }>(db, "SELECT class_key || ':' || instance_index AS k FROM counterexamples ORDER BY k").map((r) => r.k),
+  };
+}
+
+// Done chunks of one class must tile [0, count) exactly: no gap, no overlap, so nothing is counted twice.
+function tiling(db: string): Record<string, string> {
+  const rows = query<{ class_key: string; start_index: number; end_index: number }>(
+    db,
+    "SELECT class_key, start_index, end_index FROM chunks WHERE state = 'done' ORDER BY class_key, start_index",
+  );
+  const out: Record<string, string> = {};
+  for (const r of rows) {
+    const prev = out[r.class_key] ?? '0';
+    out[r.class_key] = Number(prev) === r.start_index ? String(r.end_index) : `gap-or-overlap at ${r.start_index}`;
+  }
+  return out;
+}
+
+describe('kill -9 and worker crashes (built CLI, real store files)', () => {
+  it('a sweep killed with SIGKILL resumes to the same store as an uninterrupted one', async () => {
+    const reference = join(dir, 'reference.sqlite');
+    expect(cli(['run', ...ARGS, '--db', reference]).status).toBe(1);
+
+    const killed = join(dir, 'killed.sqlite');
+    const child = cliAsync(['run', ...ARGS, '--db', killed]);
+    const exited = new Promise((resolve) => child.on('exit', resolve));
+    let doneAtKill = 0;
+    for (let waited = 0; waited < 60_000; waited += 20) {
+      await new Promise((r) => setTimeout(r, 20));
+      try {
+        doneAtKill = query<{ n: number }>(killed, "SELECT COUNT(*) AS n FROM chunks WHERE state = 'done'")[0]!.n;
+      } catch {
+        continue; // the store is not created yet
+      }
+      if (doneAtKill >= 40) break;
+    }
+    child.kill('SIGKILL');
+    await exited;
+    const atKill = query<{ status: string }>(killed, 'SELECT status FROM runs')[0]!;
+    expect(atKill.status).toBe('running'); // killed mid-sweep, so the kill really interrupted work
+    expect(doneAtKill).toBeGreaterThanOrEqual(40);
+
+    const resumed = cli(['run', ...ARGS, '--db', killed]);
+    expect(resumed.status).toBe(1);
+    const summary = JSON.parse(resumed.stdout) as { claims: { instancesChecked: number }[] };
+    // 2^3 + 2^6 + 2^9 + 2^12 + 2^15 labelings in classes n = 1..5 (common practice, no source).
+    const total = [1, 2, 3, 4, 5].reduce((a, n) => a + 2 ** (3 * n), 0);
+    expect(summary.claims[0]!.instancesChecked).toBeLessThan(total);
+    expect(summary.claims[0]!.instancesChecked).toBeGreaterThan(0);
+    expect(outcome(killed)).toEqual(outcome(reference));
+    expect(tiling(killed)).toEqual(tiling(reference));
+    expect(query<{ status: string }>(killed, 'SELECT status FROM runs ORDER BY run_id').map((r) => r.status)).toEqual(['interrupted', 'completed']);
+    expect(query(killed, "SELECT * FROM chunks WHERE state = 'leased'")).toEqual([]);
+  });
+
+  it('an injected worker crash is retried and the run completes with the full result', () => {
+    const db = join(dir, 'crash.sqlite');
+    const r = cli(['run', CLAIM, '--workers', '2', '--chunk-size', '64', '--json', '--db', db], { PUZZLESWEEP_TEST_CRASH: 'n=4:1600' });
+    expect(r.status).toBe(1);
+    const summary = JSON.parse(r.stdout) as { workerCrashes: number; claims: { status: string; instancesChecked: number }[] };
+    expect(summary.workerCrashes).toBe(1);
+    expect(summary.claims[0]!.status).toBe('completed');
+    // 8 + 64 + 512 + 4096 labelings for n = 1..4 (common practice, no source).
+    expect(summary.claims[0]!.instancesChecked).toBe(4680);
+    expect(tiling(db)['n=4']).toBe('4096');
+  });
+});
