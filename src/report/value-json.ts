@@ -28,5 +28,6 @@ export function countJson(r: CountResult): object {
     ...(r.completion ? { completion: { lengths: [...r.completion.region.lengths], sides: [...r.completion.sides] } } : {}),
     puzzles: r.puzzles.toString(),
     value: valueJson(r.value),
+    ...(r.distribution ? { distribution: { kind: r.distribution.kind, counts: r.distribution.counts.map(String) } } : {}),
   };
 }

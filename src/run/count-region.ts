@@ -2,7 +2,10 @@ import {
   completeToTriangle,
   countBoundary,
   fillingCountSemiring,
+  generatingSemiring,
   integerSemiring,
+  statisticWeigher,
+  type Generating,
   makeRegion,
   polynomialSemiring,
   type PieceSet,
@@ -10,7 +13,7 @@ import {
   type Region,
   type SafeInt,
 } from '../engine/index.js';
-import { toAppError } from '../errors.js';
+import { AppError, toAppError } from '../errors.js';
 import { hasIntegerWeights } from '../claims/resolve-theory.js';
 
 export type RegionValue =
@@ -25,6 +28,8 @@ export interface CountResult {
   readonly completion?: { readonly region: Region; readonly sides: readonly string[] };
   readonly puzzles: SafeInt;
   readonly value: RegionValue;
+  /** With `statistic`: the number of puzzles with k pieces of that kind, as coefficients a_0, a_1, …. */
+  readonly distribution?: { readonly kind: string; readonly counts: Generating };
 }
 
 /** Side lengths from six clockwise strings, validated as a region. */
@@ -37,7 +42,7 @@ export function regionOfSides(sides: readonly string[]): Region {
 }
 
 /** The exact value and the number of fillings of one boundary, or of its completed triangle. */
-export function countRegion(pieces: PieceSet, sides: readonly string[], options: { completed?: boolean } = {}): CountResult {
+export function countRegion(pieces: PieceSet, sides: readonly string[], options: { completed?: boolean; statistic?: string } = {}): CountResult {
   try {
     const region = regionOfSides(sides);
     const completion = options.completed ? completeToTriangle(region, sides, pieces) : undefined;
@@ -50,7 +55,16 @@ export function countRegion(pieces: PieceSet, sides: readonly string[], options:
       const ring = polynomialSemiring(target.region.size);
       value = { type: 'polynomial', value: countBoundary(target.region, target.sides, pieces, { semiring: ring }), size: ring.size, variableNames: ring.variableNames };
     }
-    return { theory: pieces.name, region, sides, ...(completion ? { completion } : {}), puzzles, value };
+    const kind = options.statistic;
+    if (kind !== undefined && !pieces.pieces.some((p) => p.kind === kind)) {
+      const kinds = [...new Set(pieces.pieces.map((p) => p.kind))];
+      throw new AppError('invalid_argument', `--statistic: expected a piece kind of ${pieces.name}, one of ${kinds.map((k) => `'${k}'`).join(' | ')}, received '${kind}'`, { path: '--statistic' });
+    }
+    const distribution =
+      kind === undefined
+        ? undefined
+        : { kind, counts: countBoundary(target.region, target.sides, pieces, { semiring: generatingSemiring, weigher: statisticWeigher(new Set([kind])) }) };
+    return { theory: pieces.name, region, sides, ...(completion ? { completion } : {}), puzzles, value, ...(distribution ? { distribution } : {}) };
   } catch (e) {
     throw toAppError(e, '--sides');
   }

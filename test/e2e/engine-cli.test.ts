@@ -31,6 +31,14 @@ describe('puzzlesweep count', () => {
     expect(JSON.parse(r.stdout).value).toBe('2');
   });
 
+  it('counts puzzles by a statistic: G1·G1 ∋ −G21 comes from one puzzle with one K-piece [Buch, Acta Math. 2002]', () => {
+    const r = cli(['count', '--theory', 'k-theory', '--triangle', '0101,0101,1010', '--statistic', 'k-piece', '--json']);
+    expect(JSON.parse(r.stdout)).toMatchObject({ value: '-1', distribution: { kind: 'k-piece', counts: ['0', '1'] } });
+    const bad = cli(['count', '--theory', 'k-theory', '--triangle', '0101,0101,1010', '--statistic', 'k']);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toContain("one of '0-triangle' | '1-triangle' | '10-triangle' | 'k-piece', received 'k'");
+  });
+
   it('counts the completed triangle with --completed', () => {
     const r = cli(['count', '--theory', 'cohomology', '--sides', '01,1,01,1,01,1', '--completed', '--json']);
     expect(r.status).toBe(0);

@@ -1,5 +1,6 @@
 import type { CommandModule } from 'yargs';
 import { resolveTheory } from '../../claims/resolve-theory.js';
+import { generatingSemiring } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
 import { countRegion } from '../../run/count-region.js';
 import { parseBoundaryArgs } from '../boundary-args.js';
@@ -10,6 +11,7 @@ interface CountArgs {
   triangle?: string;
   sides?: string;
   completed: boolean;
+  statistic?: string;
   json: boolean;
 }
 
@@ -22,11 +24,12 @@ export const countCommand: CommandModule<object, CountArgs> = {
       .option('triangle', { type: 'string', describe: 'λ,μ,ν on the upright triangle: λ up the NW side, μ down the NE side, ν along the bottom' })
       .option('sides', { type: 'string', describe: "six clockwise side strings s1,…,s6; an empty side is '' or '-'" })
       .option('completed', { type: 'boolean', default: false, describe: 'count the completed triangle instead of the region itself' })
+      .option('statistic', { type: 'string', describe: 'also count puzzles by their number of pieces of this kind (e.g. k-piece, equivariant)' })
       .option('json', { type: 'boolean', default: false, describe: 'print one JSON object' }) as never,
   handler: (args) =>
     runCommand(args.json, () => {
       const pieces = resolveTheory(args.theory);
-      const result = countRegion(pieces, parseBoundaryArgs(args), { completed: args.completed });
+      const result = countRegion(pieces, parseBoundaryArgs(args), { completed: args.completed, ...(args.statistic !== undefined ? { statistic: args.statistic } : {}) });
       if (args.json) {
         process.stdout.write(`${JSON.stringify(countJson(result))}\n`);
         return;
@@ -39,6 +42,7 @@ export const countCommand: CommandModule<object, CountArgs> = {
         ...(result.completion ? [`counted: completed triangle, sides ${counted.sides.map((s) => s || '-').join(' | ')}`] : []),
         `puzzles: ${result.puzzles}`,
         `value:   ${valueText(result.value)}`,
+        ...(result.distribution ? [`puzzles by number of ${result.distribution.kind} pieces: ${generatingSemiring.toText(result.distribution.counts)}`] : []),
       ];
       process.stdout.write(`${lines.join('\n')}\n`);
     }),
