@@ -70,10 +70,12 @@ function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
 function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number): string[] {
   const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${m.text}`];
   let shown = 0;
+  let more = false;
   try {
     for (const puzzle of enumeratePuzzles(makeRegion(m.lengths), m.sides, pieces)) {
       if (shown === limit) {
         lines.push(`  … more puzzles not drawn (raise --limit)`);
+        more = true;
         break;
       }
       shown++;
@@ -82,7 +84,7 @@ function measuredText(label: string, m: Measured, pieces: PieceSet, limit: numbe
   } catch (e) {
     throw toAppError(e);
   }
-  if (shown === 0) lines.push('  no puzzles');
+  if (shown === 0 && !more) lines.push('  no puzzles');
   return lines;
 }
 
