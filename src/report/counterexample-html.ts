@@ -1,0 +1,57 @@
+import { countBoundary, enumeratePuzzles, fillingCountSemiring, makeRegion, type PieceSet, type Puzzle } from '../engine/index.js';
+import type { ReportBoundary, ReportCounterexample } from './report-data.js';
+import { boundaryTitle, drawPuzzlesSvg } from './svg-drawing.js';
+import { escapeXml, valueHtml } from './value-markup.js';
+
+/** Finds the piece set of a theory named in the store. */
+export type PieceSetResolver = (theory: string) => PieceSet;
+
+const sidesHtml = (sides: readonly string[]) => `<span class="sides">${escapeXml(boundaryTitle(sides))}</span>`;
+
+function puzzlesOf(b: ReportBoundary, pieces: PieceSet, limit: number): { drawn: Puzzle[]; total: bigint } {
+  const region = makeRegion(b.sides.map((s) => [...s].length));
+  const total = BigInt(countBoundary(region, b.sides, pieces, { semiring: fillingCountSemiring }));
+  const drawn: Puzzle[] = [];
+  for (const p of enumeratePuzzles(region, b.sides, pieces)) {
+    if (drawn.length >= limit) break;
+    drawn.push(p);
+  }
+  return { drawn, total };
+}
+
+function boundaryFigure(role: 'left' | 'right', b: ReportBoundary, resolve: PieceSetResolver, limit: number): string {
+  const head = `<figcaption><span class="role">${role === 'left' ? 'claimed side' : 'compared side'}</span><span>${escapeXml(b.theory)}</span>${sidesHtml(b.sides)}<span>value <span class="value">${valueHtml(b.value)}</span></span>`;
+  let drawing: string;
+  let total = '';
+  try {
+    const { drawn, total: n } = puzzlesOf(b, resolve(b.theory), limit);
+    total = ` data-puzzle-total="${n}"`;
+    const more = n > BigInt(drawn.length) ? `<p class="note">first ${drawn.length} of ${n} puzzles drawn</p>` : '';
+    drawing = n === 0n ? '<p class="note">no puzzle has this boundary</p>' : `<div class="drawing">${drawPuzzlesSvg(drawn, { standalone: false, unit: 50, maxWidth: 1080 })}</div>${more}`;
+    return `<figure data-boundary="${role}"${total}>${head}<span>${n} puzzle${n === 1n ? '' : 's'}</span></figcaption>${drawing}</figure>`;
+  } catch (e) {
+    drawing = `<p class="note">not drawn: ${escapeXml((e as Error).message)}</p>`;
+    return `<figure data-boundary="${role}">${head}</figcaption>${drawing}</figure>`;
+  }
+}
+
+/** One counterexample drawn in full: both boundaries, both values, every puzzle (up to `puzzleLimit` each). */
+export function counterexampleCardHtml(c: ReportCounterexample, number: number, resolve: PieceSetResolver, puzzleLimit: number): string {
+  const perm = c.permutation ? `<span>permutation [${c.permutation.join(', ')}]</span>` : '';
+  return [
+    `<article class="cx" data-counterexample="${number}">`,
+    `<header><h3>Counterexample ${number} <span class="value">${valueHtml(c.left.value)}</span><span class="ne">≠</span><span class="value">${valueHtml(c.right.value)}</span></h3>`,
+    `<span>class ${escapeXml(c.classKey)} · instance ${c.index} · side lengths ${c.left.lengths.join(',')} · size ${c.size}</span>${perm}</header>`,
+    `<div class="pair">${boundaryFigure('left', c.left, resolve, puzzleLimit)}${boundaryFigure('right', c.right, resolve, puzzleLimit)}</div>`,
+    '</article>',
+  ].join('\n');
+}
+
+/** The counterexamples not drawn, one table row each. */
+export function counterexampleTableHtml(rest: readonly ReportCounterexample[], firstNumber: number): string {
+  const rows = rest.map(
+    (c, k) =>
+      `<tr data-listed="${firstNumber + k}"><td class="num">${firstNumber + k}</td><td>${escapeXml(c.classKey)}</td><td class="num">${c.index}</td><td>${sidesHtml(c.left.sides)}</td><td class="value">${valueHtml(c.left.value)}</td><td>${sidesHtml(c.right.sides)}</td><td class="value">${valueHtml(c.right.value)}</td></tr>`,
+  );
+  return `<table class="rest"><thead><tr><th class="num">#</th><th>class</th><th class="num">instance</th><th>claimed boundary</th><th>value</th><th>compared boundary</th><th>value</th></tr></thead><tbody>${rows.join('')}</tbody></table>`;
+}
