@@ -10,6 +10,7 @@ import { counterexamplesCommand } from './commands/counterexamples-command.js';
 import { replayCommand } from './commands/replay-command.js';
 import { schemaCommand } from './commands/schema-command.js';
 import { demoCommand } from './commands/demo-command.js';
+import { reportCommand } from './commands/report-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
@@ -22,6 +23,7 @@ await yargs(hideBin(process.argv))
   .command(schemaCommand)
   .command(demoCommand)
   .command(crosscheckCommand)
+  .command(reportCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()
   .fail((msg, err, y) => {
