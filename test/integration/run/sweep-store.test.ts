@@ -107,6 +107,17 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
     expect(c.counterexamples).toBe(expectedFailures(5, 5).length + (c.classes.find((k) => k.key === 'n=6')!.fails ?? 0));
   });
 
+  it('stops handing out chunks at --max-counterexamples and at --time-limit, keeping what finished', async () => {
+    const capped = await sweep(join(dir, 'capped.sqlite'), claim, { maxCounterexamples: 3, workers: 1 });
+    expect(capped.claims[0]!.stopReason).toBe('max_counterexamples');
+    expect(capped.claims[0]!.counterexamples).toBeGreaterThanOrEqual(3);
+    expect(capped.claims[0]!.counterexamples).toBeLessThan(expectedFailures(8, 5).length);
+    const timed = await sweep(join(dir, 'timed.sqlite'), fakeClaim({ maxN: 10, failFrom: 99, spinMicros: 100 }, 'timed-claim'), { timeLimit: 0.3 });
+    expect(timed.claims[0]!.stopReason).toBe('time_limit');
+    expect(timed.claims[0]!.status).toBe('completed');
+    expect(timed.claims[0]!.classes.some((k) => k.state === 'incomplete')).toBe(true);
+  });
+
   it('an aborted run is interrupted, keeps finished chunks and verifies nothing it did not finish', async () => {
     const abortDb = join(dir, 'abort.sqlite');
     const ctl = new AbortController();

@@ -1,0 +1,69 @@
+/**
+ * One sweep benchmark case in a fresh process (so peak memory is its own); prints JSON. Invoked by
+ * sweep-benchmark.ts as `node --import tsx sweep-case.ts <json>`; workers run the built dist/ files.
+ */
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { applyTransform, createEvaluator, parseClaim, planClaim, type ClaimInput } from '../../src/claims/index.js';
+import { countBoundary, integerSemiring, makeRegion } from '../../src/engine/index.js';
+import { loadSweepClaim } from '../../src/run/load-sweep-claim.js';
+import { parseRunOptions } from '../../src/run/run-options.js';
+import { runSweep } from '../../src/run/run-sweep.js';
+
+export type SweepCase =
+  | { kind: 'batched' | 'per-instance'; claim: ClaimInput; limit: number }
+  | { kind: 'evaluate'; claim: ClaimInput; exact: boolean; limit: number }
+  | { kind: 'pool'; claim: ClaimInput; workers: number; chunkSize: number };
+
+const rss = () => process.memoryUsage().rss / 2 ** 20;
+
+// One process-local loop over the first `limit` instances of the claim's first class.
+function inProcess(c: Extract<SweepCase, { limit: number }>): Record<string, unknown> {
+  const claim = parseClaim(c.claim);
+  const plan = planClaim(claim);
+  const cls = plan.classes()[0]!;
+  const n = Math.min(c.limit, Number(plan.instanceCount(cls)));
+  const pieces = plan.compiled.left;
+  const region = makeRegion(cls.lengths);
+  const evaluator = createEvaluator(claim, { exact: c.kind === 'evaluate' ? c.exact : true }, { pairing: false });
+  const start = performance.now();
+  let holds = 0;
+  for (let i = 0n; i < BigInt(n); i++) {
+    const inst = plan.instanceAt(cls, i);
+    if (c.kind === 'per-instance') {
+      // The baseline: one closed-boundary DP for b and one for T(b), no shared sweeps.
+      const t = applyTransform(claim.transform, cls.lengths, inst.sides, pieces);
+      const a = countBoundary(region, inst.sides, pieces, { semiring: integerSemiring });
+      const b = countBoundary(makeRegion(t.lengths), t.sides, pieces, { semiring: integerSemiring });
+      if (a === b) holds++;
+    } else if (evaluator.evaluate(inst).status === 'holds') holds++;
+  }
+  const ms = performance.now() - start;
+  return { instances: n, holds, ms, perSecond: (n / ms) * 1000 };
+}
+
+async function pool(c: Extract<SweepCase, { kind: 'pool' }>): Promise<Record<string, unknown>> {
+  const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-bench-'));
+  const file = join(dir, 'claim.json');
+  writeFileSync(file, JSON.stringify(c.claim));
+  const samples: number[] = [];
+  let total = 0;
+  const start = performance.now();
+  const s = await runSweep({
+    claims: [loadSweepClaim(file)],
+    options: parseRunOptions({ db: join(dir, 'bench.sqlite'), workers: c.workers, chunkSize: c.chunkSize }),
+    onProgress: (p) => {
+      total = p.total;
+      if (samples.length < Math.floor((p.checked / Math.max(p.total, 1)) * 10)) samples.push(Math.round(rss()));
+    },
+  });
+  const ms = performance.now() - start;
+  rmSync(dir, { recursive: true, force: true });
+  const checked = s.claims[0]!.instancesChecked;
+  return { instances: checked, total, ms, perSecond: (checked / ms) * 1000, rssSamplesMB: samples, maxRssMB: process.resourceUsage().maxRSS / 1024 };
+}
+
+const c = JSON.parse(process.argv[2]!) as SweepCase;
+const out = c.kind === 'pool' ? await pool(c) : inProcess(c);
+process.stdout.write(`${JSON.stringify({ ...out, maxRssMB: process.resourceUsage().maxRSS / 1024 })}\n`);
