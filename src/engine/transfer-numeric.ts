@@ -79,7 +79,7 @@ export function sweepNumeric<T>(plan: TransferPlan, semiring: Semiring<T>, weigh
         const high = (p - low) / unit;
         if (step.type === 'up') {
           for (const o of plan.upByLeft[slant]!) {
-            if (step.bottom !== null && o.bottom !== step.bottom) continue;
+            if (step.bottom !== null ? o.bottom !== step.bottom : step.onBoundary && o.bottom >= plan.boundaryCount) continue;
             const e = row[o.piece]!;
             const v = e.isOne ? value : mul(value, e.w);
             if (!isZero(v)) put(next, o.right + a * (low + unit * (o.bottom + a * high)), v, !e.isOne);

@@ -11,7 +11,15 @@ import type { Region } from './region.js';
 export type Step =
   | { readonly type: 'start'; readonly label: number }
   | { readonly type: 'end'; readonly label: number }
-  | { readonly type: 'up'; readonly placed: number; readonly triangle: UnitTriangle; readonly bottom: number | null }
+  | {
+      readonly type: 'up';
+      readonly placed: number;
+      readonly triangle: UnitTriangle;
+      /** The label side 5 prescribes for this bottom edge, if it is fixed. */
+      readonly bottom: number | null;
+      /** The bottom edge lies on side 5, so only boundary labels may go there even when it is open. */
+      readonly onBoundary: boolean;
+    }
   | { readonly type: 'down'; readonly placed: number; readonly triangle: UnitTriangle };
 
 export interface UpOption {
@@ -28,6 +36,8 @@ export interface TransferPlan {
   readonly region: Region;
   readonly pieces: PieceSet;
   readonly alphabetSize: number;
+  /** Labels 0 .. boundaryCount−1 are the boundary labels (they come first in `PieceSet.labels`). */
+  readonly boundaryCount: number;
   /** Profile before the first row: side 2, left to right. */
   readonly initial: string;
   readonly steps: readonly Step[];
@@ -58,7 +68,7 @@ export function compilePlan(region: Region, boundary: Boundary, pieces: PieceSet
     let placed = 0;
     for (const triangle of row) {
       if (triangle.orientation === 'up') {
-        steps.push({ type: 'up', placed, triangle, bottom: y === 0 ? bottomAt(triangle.x) : null });
+        steps.push({ type: 'up', placed, triangle, bottom: y === 0 ? bottomAt(triangle.x) : null, onBoundary: y === 0 });
         placed++;
       } else {
         steps.push({ type: 'down', placed, triangle });
@@ -74,7 +84,7 @@ export function compilePlan(region: Region, boundary: Boundary, pieces: PieceSet
     if (p.orientation === 'up') upByLeft[l0]!.push({ piece, right: l1, bottom: l2 });
     else downByTopLeft[l0 * a + l2]!.push({ piece, right: l1 });
   });
-  return { region, pieces, alphabetSize: a, initial: side2!.map(labelChar).join(''), steps, upByLeft, downByTopLeft };
+  return { region, pieces, alphabetSize: a, boundaryCount: pieces.boundaryLabels.length, initial: side2!.map(labelChar).join(''), steps, upByLeft, downByTopLeft };
 }
 
 /** Calls `emit(next, piece)` for every way to take one step from `key` (`piece` −1 for row ends). */
@@ -91,7 +101,7 @@ export function expandStep(plan: TransferPlan, step: Step, key: string, emit: (n
       const head = key.slice(0, step.placed);
       const rest = key.slice(step.placed, len - 1);
       for (const o of plan.upByLeft[key.charCodeAt(len - 1)]!) {
-        if (step.bottom !== null && o.bottom !== step.bottom) continue;
+        if (step.bottom !== null ? o.bottom !== step.bottom : step.onBoundary && o.bottom >= plan.boundaryCount) continue;
         emit(head + labelChar(o.bottom) + rest + labelChar(o.right), o.piece);
       }
       return;

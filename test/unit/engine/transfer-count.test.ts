@@ -13,7 +13,7 @@ import {
   triangleRegion,
   makeRegion,
 } from '../../../src/engine/index.js';
-import { stringOfPartition } from '../../support/boundaries.js';
+import { binaryStrings, stringOfPartition } from '../../support/boundaries.js';
 
 const count = (theory: string, l: string, m: string, n: string) =>
   countBoundary(triangleRegion(l.length), structureConstantSides(l, m, n), theoryPieceSet(theory), { semiring: integerSemiring });
@@ -66,6 +66,29 @@ describe('other theories', () => {
       weigher: statisticWeigher(new Set(['k-piece'])),
     });
     expect(v).toEqual([0, 1]);
+  });
+});
+
+describe('countCompletions', () => {
+  // One sweep with side 5 open must equal one count per labeling of side 5, and must list only
+  // labelings by boundary labels (internal labels such as 10 never sit on the boundary) [definition].
+  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'])('equals one count per side-5 labeling in %s', (theory) => {
+    const pieces = theoryPieceSet(theory);
+    for (const lengths of [[4, 0, 4, 0, 4, 0], [2, 1, 2, 2, 1, 2], [0, 3, 0, 3, 0, 3]]) {
+      const region = makeRegion(lengths);
+      const ring = polynomialSemiring(region.size);
+      const strings = binaryStrings;
+      for (const s1 of strings(lengths[0]!).slice(0, 6))
+        for (const s3 of strings(lengths[2]!).slice(0, 6)) {
+          const sides = [s1, '1'.repeat(lengths[1]!), s3, '0'.repeat(lengths[3]!), null, '01'.repeat(3).slice(0, lengths[5]!)];
+          const all = countCompletions(region, sides, pieces, { semiring: ring });
+          for (const key of all.keys()) expect(key).toMatch(/^[01]*$/);
+          for (const s5 of strings(lengths[4]!)) {
+            const one = countBoundary(region, [...sides.slice(0, 4), s5, sides[5]] as string[], pieces, { semiring: ring });
+            expect(ring.equals(all.get(s5) ?? ring.zero, one), `${sides} ${s5}`).toBe(true);
+          }
+        }
+    }
   });
 });
 
