@@ -69,6 +69,25 @@ describe('kill -9 and worker crashes (built CLI, real store files)', () => {
     expect(query(killed, "SELECT * FROM chunks WHERE state = 'leased'")).toEqual([]);
   });
 
+  it('SIGTERM stores finished chunks, marks the run interrupted and exits 130', async () => {
+    const db = join(dir, 'term.sqlite');
+    const child = cliAsync(['run', ...ARGS, '--db', db]);
+    const exited = new Promise<number | null>((resolve) => child.on('exit', (code) => resolve(code)));
+    for (let waited = 0; waited < 60_000; waited += 20) {
+      await new Promise((r) => setTimeout(r, 20));
+      try {
+        if (query<{ n: number }>(db, "SELECT COUNT(*) AS n FROM chunks WHERE state = 'done'")[0]!.n >= 20) break;
+      } catch {
+        continue;
+      }
+    }
+    child.kill('SIGTERM');
+    expect(await exited).toBe(130);
+    expect(query(db, 'SELECT status, stop_reason FROM runs')).toEqual([{ status: 'interrupted', stop_reason: 'signal' }]);
+    expect(query(db, "SELECT * FROM chunks WHERE state = 'leased'")).toEqual([]);
+    expect(query<{ k: string }>(db, 'SELECT class_key AS k FROM verified_classes').map((r) => r.k)).not.toContain('n=5');
+  });
+
   it('an injected worker crash is retried and the run completes with the full result', () => {
     const db = join(dir, 'crash.sqlite');
     const r = cli(['run', CLAIM, '--workers', '2', '--chunk-size', '64', '--json', '--db', db], { PUZZLESWEEP_TEST_CRASH: 'n=4:1600' });
