@@ -67,6 +67,8 @@ export interface ClaimPlan {
   /** The index ↔ instance bijection inside a class; consecutive indices share sides 1–4 and 6 where possible. */
   instanceAt(cls: SizeClass, index: bigint): Instance;
   indexOf(cls: SizeClass, sides: readonly string[]): bigint | undefined;
+  /** Optional: the instances start ≤ index < end in order, cheaper than one `instanceAt` each. */
+  instancesFrom?(cls: SizeClass, start: bigint, end: bigint): Iterable<Instance>;
 }
 
 export interface Evaluator {

@@ -71,12 +71,23 @@ export function findPermutations(space: 'blockReversals' | 'allPermutations', m:
   return { found, truncated };
 }
 
-/** Printable and stable-JSON form of a value. */
+/**
+ * Printable and stable-JSON form of a value. `text` and `json` are computed on first read: a sweep
+ * reads them only for counterexamples, and building them for every instance dominated its cost.
+ */
 export function measured(theory: string, lengths: readonly number[], sides: readonly string[], v: Value, names: readonly string[]): Measured {
-  const base = { theory, lengths: [...lengths], sides: [...sides] };
-  if (v.kind === 'int') return { ...base, text: v.v.toString(), json: v.v.toString() };
-  if (v.kind === 'gen') return { ...base, text: generatingSemiring.toText(v.v), json: { distribution: v.v.map((c) => c.toString()) } };
-  if (v.kind === 'mod') return { ...base, text: `[${v.v.map((r, k) => `${r} mod ${DEFAULT_PRIMES[k]}`).join(', ')}]`, json: { residues: [...v.v], primes: [...DEFAULT_PRIMES] } };
+  let shown: { text: string; json: unknown } | undefined;
+  const show = () => (shown ??= render(lengths, v, names));
+  const out = { theory, lengths: [...lengths], sides: [...sides] } as unknown as Measured;
+  Object.defineProperty(out, 'text', { enumerable: true, get: () => show().text });
+  Object.defineProperty(out, 'json', { enumerable: true, get: () => show().json });
+  return out;
+}
+
+function render(lengths: readonly number[], v: Value, names: readonly string[]): { text: string; json: unknown } {
+  if (v.kind === 'int') return { text: v.v.toString(), json: v.v.toString() };
+  if (v.kind === 'gen') return { text: generatingSemiring.toText(v.v), json: { distribution: v.v.map((c) => c.toString()) } };
+  if (v.kind === 'mod') return { text: `[${v.v.map((r, k) => `${r} mod ${DEFAULT_PRIMES[k]}`).join(', ')}]`, json: { residues: [...v.v], primes: [...DEFAULT_PRIMES] } };
   // The same layout as the CLI's value JSON: y_1..y_n, then named variables, exponents as arrays.
   let n = lengths[5]! + lengths[0]! + lengths[1]!;
   for (const key of v.v.keys()) for (let k = 0; k < Math.min(key.length, NAMED_OFFSET); k++) if (key.charCodeAt(k) > 0) n = Math.max(n, k + 1);
@@ -84,5 +95,5 @@ export function measured(theory: string, lengths: readonly number[], sides: read
   const text = polyText(v.v, normalizedName(names));
   const terms = polyTerms(dense, n + names.length).map((t) => ({ coefficient: t.coefficient.toString(), exponents: t.exponents }));
   const variables = names.length ? { variables: [...Array.from({ length: n }, (_, k) => `y${k + 1}`), ...names] } : {};
-  return { ...base, text, json: { text, terms, ...variables } };
+  return { text, json: { text, terms, ...variables } };
 }

@@ -80,3 +80,15 @@ export function contentVectors(length: number, parts: number, fixed: ReadonlyMap
   if (parts > 0) go(0, length);
   return out;
 }
+
+/** Steps `labels` to the next string of the same content in lexicographic order, in place; false at the last. */
+export function nextString(labels: number[]): boolean {
+  let i = labels.length - 2;
+  while (i >= 0 && labels[i]! >= labels[i + 1]!) i--;
+  if (i < 0) return false;
+  let j = labels.length - 1;
+  while (labels[j]! <= labels[i]!) j--;
+  [labels[i], labels[j]] = [labels[j]!, labels[i]!];
+  for (let a = i + 1, b = labels.length - 1; a < b; a++, b--) [labels[a], labels[b]] = [labels[b]!, labels[a]!];
+  return true;
+}

@@ -4,13 +4,22 @@ import { evalAffine } from './affine.js';
 import type { ClaimPlan, Instance, SizeClass } from './claim-api.js';
 import type { Claim } from './claim-schema.js';
 import { compileClaim, type CompiledClaim } from './compile-claim.js';
-import { contentVectors, multinomial, rankString, unrankString } from './multiset-rank.js';
+import { contentVectors, multinomial, nextString, rankString, unrankString } from './multiset-rank.js';
 
 /** One group of sides sharing a content vector; `sides` in radix order (side 5 last, least significant). */
+interface Content {
+  readonly counts: readonly number[];
+  readonly strings: bigint;
+  readonly offset: bigint;
+  readonly size: bigint;
+}
+
 interface Group {
   readonly sides: readonly number[];
-  readonly contents: readonly { readonly counts: readonly number[]; readonly strings: bigint; readonly offset: bigint; readonly size: bigint }[];
+  readonly contents: readonly Content[];
   readonly size: bigint;
+  /** Contents keyed by their counts joined with commas. */
+  readonly byContent: ReadonlyMap<string, Content>;
 }
 
 interface Layout {
@@ -36,6 +45,13 @@ function classKey(values: Readonly<Record<string, number>>): string {
 
 function layoutOf(compiled: CompiledClaim, cls: SizeClass): Layout {
   const alphabet = compiled.left.boundaryLabels;
+  // Boundary labels are single characters, so a side is read one char per edge.
+  const labelIndex = new Map(alphabet.map((a, i) => [a, i]));
+  const contentKey = (labels: readonly number[]) => {
+    const counts = new Array<number>(alphabet.length).fill(0);
+    for (const a of labels) counts[a]!++;
+    return counts.join(',');
+  };
   const groupOf = new Map<number, number[]>();
   for (const g of compiled.sameContent) for (const s of g) groupOf.set(s, [...g]);
   const fixedBySide = new Map<number, Map<number, number>>();
@@ -70,7 +86,7 @@ function layoutOf(compiled: CompiledClaim, cls: SizeClass): Layout {
       offset += size;
       return entry;
     });
-    groups.push({ sides: members, contents, size: offset });
+    groups.push({ sides: members, contents, size: offset, byContent: new Map(contents.map((c) => [c.counts.join(','), c])) });
   }
   // The group holding side 5 is least significant, so runs of consecutive indices vary side 5 only.
   const five = groups.findIndex((g) => g.sides.includes(4));
@@ -104,6 +120,13 @@ function assignments(compiled: CompiledClaim): Record<string, number>[] {
 export function planClaim(claim: Claim): ClaimPlanExt {
   const compiled = compileClaim(claim);
   const alphabet = compiled.left.boundaryLabels;
+  // Boundary labels are single characters, so a side is read one char per edge.
+  const labelIndex = new Map(alphabet.map((a, i) => [a, i]));
+  const contentKey = (labels: readonly number[]) => {
+    const counts = new Array<number>(alphabet.length).fill(0);
+    for (const a of labels) counts[a]!++;
+    return counts.join(',');
+  };
   const layouts = new Map<string, Layout>();
   const layout = (cls: SizeClass) => {
     let l = layouts.get(cls.key);
@@ -153,29 +176,46 @@ export function planClaim(claim: Claim): ClaimPlanExt {
       }
       return { classKey: cls.key, index, sides };
     },
+    // Side 5 is the least significant digit, ranked in lexicographic order within its content, so
+    // index + 1 is the next string of side 5 until it wraps; only then is a full unranking needed.
+    *instancesFrom(cls, start, end) {
+      let labels: number[] = [];
+      let previous: Instance | undefined;
+      for (let index = start; index < end; index++) {
+        if (previous && nextString(labels)) {
+          const sides = [...previous.sides];
+          sides[4] = labels.map((a) => alphabet[a]!).join('');
+          previous = { classKey: cls.key, index, sides };
+        } else {
+          previous = this.instanceAt(cls, index);
+          labels = [...previous.sides[4]!].map((c) => alphabet.indexOf(c));
+        }
+        yield previous;
+      }
+    },
     indexOf(cls, sides) {
       if (sides.length !== 6) return undefined;
       const l = layout(cls);
       const labelIdx: number[][] = [];
       for (let i = 0; i < 6; i++) {
-        const chars = [...sides[i]!];
-        if (chars.length !== cls.lengths[i]) return undefined;
-        const idx = chars.map((c) => alphabet.indexOf(c));
-        if (idx.some((x) => x < 0)) return undefined;
+        const side = sides[i]!;
+        if (side.length !== cls.lengths[i]) return undefined;
+        const idx = new Array<number>(side.length);
+        for (let k = 0; k < side.length; k++) {
+          const a = labelIndex.get(side[k]!);
+          if (a === undefined) return undefined;
+          idx[k] = a;
+        }
         labelIdx.push(idx);
       }
       let index = 0n;
       for (const group of l.groups) {
-        const counts = new Array<number>(alphabet.length).fill(0);
-        for (const a of labelIdx[group.sides[0]!]!) counts[a]!++;
-        const key = counts.join(',');
-        const content = group.contents.find((c) => c.counts.join(',') === key);
+        const key = contentKey(labelIdx[group.sides[0]!]!);
+        const content = group.byContent.get(key);
         if (!content) return undefined;
         let r = 0n;
         for (const s of group.sides) {
-          const own = new Array<number>(alphabet.length).fill(0);
-          for (const a of labelIdx[s]!) own[a]!++;
-          if (own.join(',') !== key) return undefined;
+          if (contentKey(labelIdx[s]!) !== key) return undefined;
           r = r * content.strings + rankString(labelIdx[s]!, content.counts);
         }
         index = index * group.size + content.offset + r;

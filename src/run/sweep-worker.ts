@@ -1,4 +1,4 @@
-import type { Instance, InstanceResult, SizeClass } from '../claims/claim-api.js';
+import type { ClaimPlan, Instance, InstanceResult, SizeClass } from '../claims/claim-api.js';
 import type { CounterexampleRecord } from '../store/index.js';
 import { importClaimRuntime, type ClaimRuntime } from './claim-runtime-module.js';
 import { serializeError } from './serialize-error.js';
@@ -45,6 +45,10 @@ function counterexample(cls: SizeClass, r: InstanceResult): CounterexampleRecord
   return { classKey: cls.key, index: r.index, size: cls.size, lengths: cls.lengths, left: r.left, right: r.right, permutation: r.permutation };
 }
 
+function* unranked(plan: ClaimPlan, cls: SizeClass, start: bigint, end: bigint): Generator<Instance> {
+  for (let i = start; i < end; i++) yield plan.instanceAt(cls, i);
+}
+
 function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
   const began = performance.now();
   const cls = sizeClass(l, task.classKey);
@@ -54,8 +58,9 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
   const permutations: { index: bigint; permutation: readonly number[] }[] = [];
   let common: Map<string, readonly number[]> | undefined;
   let truncated = false;
-  for (let i = task.start; i < task.end; i++) {
-    const instance: Instance = plan.instanceAt(cls, i);
+  const instances: Iterable<Instance> = plan.instancesFrom ? plan.instancesFrom(cls, task.start, task.end) : unranked(plan, cls, task.start, task.end);
+  for (const instance of instances) {
+    const i = instance.index;
     const r = evaluator.evaluate(instance);
     out.checked++;
     if (r.method === 'modular') out.exact = false;

@@ -112,7 +112,7 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
     expect(capped.claims[0]!.stopReason).toBe('max_counterexamples');
     expect(capped.claims[0]!.counterexamples).toBeGreaterThanOrEqual(3);
     expect(capped.claims[0]!.counterexamples).toBeLessThan(expectedFailures(8, 5).length);
-    const timed = await sweep(join(dir, 'timed.sqlite'), fakeClaim({ maxN: 10, failFrom: 99, spinMicros: 100 }, 'timed-claim'), { timeLimit: 0.3 });
+    const timed = await sweep(join(dir, 'timed.sqlite'), fakeClaim({ maxN: 10, failFrom: 99, spinMicros: 1000 }, 'timed-claim'), { timeLimit: 0.3 });
     expect(timed.claims[0]!.stopReason).toBe('time_limit');
     expect(timed.claims[0]!.status).toBe('completed');
     expect(timed.claims[0]!.classes.some((k) => k.state === 'incomplete')).toBe(true);

@@ -32,6 +32,11 @@ function checkBijection(plan: ReturnType<typeof planClaim>, cls: SizeClass, acce
   }
   expect(seen.size).toBe(expected.length);
   for (const b of expected) expect(plan.indexOf(cls, b)).toBeDefined();
+  // the incremental walk over a range yields exactly the instances instanceAt names
+  const from = n / 3n;
+  const walked = [...plan.instancesFrom(cls, from, n)];
+  expect(walked.map((x) => x.index)).toEqual(Array.from({ length: Number(n - from) }, (_, k) => from + BigInt(k)));
+  for (const x of walked) expect(x.sides).toEqual(plan.instanceAt(cls, x.index).sides);
 }
 
 describe('multiset ranking', () => {
