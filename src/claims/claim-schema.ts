@@ -4,7 +4,7 @@ import { EXPRESSION_PATTERN } from './affine.js';
 import { pieceSetSchema } from './piece-set-schema.js';
 
 /** Where `puzzlesweep schema` writes the JSON Schema, relative to the repository root. */
-export const CLAIM_SCHEMA_FILE = 'schema/claim.schema.json';
+export const CLAIM_SCHEMA_FILE = 'conjectures/schema/claim.schema.json';
 
 const expression = z
   .union([z.number().int(), z.string().regex(EXPRESSION_PATTERN, "Expression: expected an integer, a variable name or a sum such as 'a+b', 'n-1' or '2*a+1'")], {

@@ -63,8 +63,8 @@ describe('status, counterexamples, replay and schema (built CLI)', () => {
     expect(schema.$schema).toBe('https://json-schema.org/draft/2020-12/schema');
     // The claim's parts as issue 3 §1 lists them.
     expect([...schema.required].sort()).toEqual(['compare', 'family', 'id', 'statement', 'theory', 'transform']);
-    expect(readFileSync(out, 'utf8')).toBe(readFileSync('schema/claim.schema.json', 'utf8'));
+    expect(readFileSync(out, 'utf8')).toBe(readFileSync('conjectures/schema/claim.schema.json', 'utf8'));
     const claim = JSON.parse(readFileSync(CLAIM, 'utf8')) as { $schema: string };
-    expect(claim.$schema).toBe('../schema/claim.schema.json');
+    expect(claim.$schema).toBe('./schema/claim.schema.json');
   });
 });
