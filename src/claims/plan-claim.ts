@@ -45,13 +45,6 @@ function classKey(values: Readonly<Record<string, number>>): string {
 
 function layoutOf(compiled: CompiledClaim, cls: SizeClass): Layout {
   const alphabet = compiled.left.boundaryLabels;
-  // Boundary labels are single characters, so a side is read one char per edge.
-  const labelIndex = new Map(alphabet.map((a, i) => [a, i]));
-  const contentKey = (labels: readonly number[]) => {
-    const counts = new Array<number>(alphabet.length).fill(0);
-    for (const a of labels) counts[a]!++;
-    return counts.join(',');
-  };
   const groupOf = new Map<number, number[]>();
   for (const g of compiled.sameContent) for (const s of g) groupOf.set(s, [...g]);
   const fixedBySide = new Map<number, Map<number, number>>();

@@ -1,5 +1,5 @@
 import type { Measured } from '../claims/claim-api.js';
-import type { CounterexampleRecord } from '../store/index.js';
+import type { ChunkFindings } from '../store/index.js';
 
 interface TaskBase {
   /** File URL of a runtime module; the compiled claims runtime next to the worker when absent. */
@@ -30,21 +30,9 @@ export interface ConfirmTask extends TaskBase {
 export type WorkerTask = ChunkTask | ConfirmTask;
 
 /** Tallies and findings of one chunk. */
-export interface ChunkResult {
-  readonly checked: number;
-  readonly holds: number;
-  readonly fails: number;
-  readonly skippedZero: number;
-  readonly paired: number;
+export interface ChunkResult extends ChunkFindings {
   /** Modular "fails" that the exact recomputation found to hold (counted as holds). */
   readonly overturned: number;
-  readonly errorBound: number;
-  readonly exact: boolean;
-  readonly durationMs: number;
-  readonly counterexamples: readonly CounterexampleRecord[];
-  readonly permutations: readonly { readonly index: bigint; readonly permutation: readonly number[] }[];
-  /** Permutations serving every instance of the chunk that has a list; undefined when none searched. */
-  readonly commonPermutations?: readonly (readonly number[])[] | undefined;
   readonly permutationsTruncated: boolean;
 }
 

@@ -1,12 +1,8 @@
 import { insertCounterexample, type CounterexampleRecord } from './counterexample-records.js';
 import type { Store } from './open-store.js';
 
-/** What a finished chunk reports; written together with its results in one transaction. */
-export interface ChunkCompletion {
-  readonly chunkId: number;
-  readonly runId: number;
-  readonly fingerprint: string;
-  readonly classKey: string;
+/** The tallies and findings of one finished chunk, as the worker reports them. */
+export interface ChunkFindings {
   readonly checked: number;
   readonly holds: number;
   readonly fails: number;
@@ -22,6 +18,14 @@ export interface ChunkCompletion {
   /** Permutations that serve every instance of the chunk (undefined when the claim searches none). */
   readonly commonPermutations?: readonly (readonly number[])[] | undefined;
   readonly permutationsTruncated?: boolean | undefined;
+}
+
+/** What a finished chunk reports; written together with its results in one transaction. */
+export interface ChunkCompletion extends ChunkFindings {
+  readonly chunkId: number;
+  readonly runId: number;
+  readonly fingerprint: string;
+  readonly classKey: string;
 }
 
 /**
