@@ -32,6 +32,7 @@ interface Layout {
 /** A plan with a few extras beyond the runner contract. */
 export interface ClaimPlanExt extends ClaimPlan {
   readonly compiled: CompiledClaim;
+  instancesFrom(cls: SizeClass, start: bigint, end: bigint): Iterable<Instance>;
   /** The class of given variable values (whatever the bounds), e.g. to resolve an `Instance.classKey`. */
   classForKey(key: string): SizeClass;
 }
