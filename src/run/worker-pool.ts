@@ -21,7 +21,7 @@ export class WorkerPool {
   crashes = 0;
 
   constructor(readonly size: number) {
-    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, idleTimeout: 60_000 });
+    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, idleTimeout: 60_000, resourceLimits: { maxYoungGenerationSizeMb: 16 } });
   }
 
   /** Runs one task; a dead worker means another try on a fresh one, up to MAX_ATTEMPTS. */
