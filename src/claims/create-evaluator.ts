@@ -61,9 +61,11 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     const t = applyTransform(claim.transform, lengths, sides, compiled.left);
     const base = { classKey: instance.classKey, index: instance.index };
     let pairable = false;
-    if (pairing && involutive && (sigma === undefined || isInvolution(sigma)) && t.lengths.every((l, i) => l === lengths[i])) {
+    // `pairable` is decided the same way with and without pairing, so that confirm() answers the question
+    // evaluate() asked: a zero left value that stands for its nonzero partner is still compared.
+    if (involutive && (sigma === undefined || isInvolution(sigma)) && t.lengths.every((l, i) => l === lengths[i])) {
       const partner = plan.indexOf(cls, t.sides);
-      if (partner !== undefined && partner < instance.index) {
+      if (pairing && partner !== undefined && partner < instance.index) {
         return {
           ...base,
           status: 'paired',

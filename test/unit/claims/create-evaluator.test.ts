@@ -157,6 +157,10 @@ describe('createEvaluator', () => {
       const p = paired.find((x) => x.classKey === r.classKey && x.index === r.index)!;
       const partner = p.status === 'paired' ? paired.find((x) => x.classKey === r.classKey && x.index === p.partnerIndex)! : p;
       expect(partner.status).toBe('fails');
+      // the exact confirmation of that failure agrees with it (a sweep stores only confirmed failures)
+      const plan = planClaim(claim);
+      const cls = plan.classes().find((c) => c.key === partner.classKey)!;
+      expect(createEvaluator(claim, { exact: false }).confirm(plan.instanceAt(cls, partner.index)).status).toBe('fails');
     }
     const stat = sweep(loadClaim(join(fixtures, 'custom-statistic.json')));
     expect(stat.some((r) => r.status === 'holds' && r.left.text.includes('t'))).toBe(true);
