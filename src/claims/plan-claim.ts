@@ -133,6 +133,9 @@ export function planClaim(claim: Claim): ClaimPlanExt {
   const outOfRange = (cls: SizeClass, index: bigint) =>
     new AppError('invalid_argument', `Instance index: expected 0 ≤ index < ${layout(cls).count} in class ${cls.key}, received ${index}`, { path: '--instance' });
 
+  // Variables the comparison's substitution mentions (expressions are plain strings inside it).
+  const relationText = JSON.stringify(claim.compare.relation);
+  const relationVariables = compiled.variables.map((v) => v.name).filter((name) => new RegExp(`(^|[^A-Za-z0-9_])${name}($|[^A-Za-z0-9_])`).test(relationText.replace(/"[A-Za-z]+":/g, ' ')));
   return {
     compiled,
     classes(maxOverride) {
@@ -142,8 +145,9 @@ export function planClaim(claim: Claim): ClaimPlanExt {
       for (const values of assignments(c)) {
         const cls = sizeClassFor(compiled, values);
         const l = layout(cls);
-        // Values giving the same lengths and the same fixed counts name the same instances: keep the first.
-        const identity = `${cls.lengths.join(',')}|${compiled.counts.map((k) => evalAffine(k.count, values)).join(',')}`;
+        // Values giving the same lengths, the same fixed counts and the same substitution name the same
+        // checks: keep the first. (A variable used only in a substitution still makes classes differ.)
+        const identity = `${cls.lengths.join(',')}|${compiled.counts.map((k) => evalAffine(k.count, values)).join(',')}|${relationVariables.map((v) => values[v]).join(',')}`;
         if (l.count === 0n || seen.has(identity)) continue;
         seen.add(identity);
         out.push(cls);

@@ -115,3 +115,18 @@ describe('planClaim', () => {
     expect(plan.indexOf(cls, ['1', '', '0', '', '0', ''])).toBeUndefined();
   });
 });
+
+describe('size classes', () => {
+  it('keeps classes that differ only in a variable of the substitution', () => {
+    // p changes the substitution y_p..y_n reversed, so n=3,p=1 and n=3,p=2 are different checks [definition]
+    const c = parseClaim({
+      id: 'substitution-variable',
+      statement: 's',
+      theory: 'equivariant',
+      family: { sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 3, max: 3 }, { name: 'p', min: 1, max: 2 }] },
+      transform: [],
+      compare: { measure: { type: 'value' }, relation: { type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 'p', to: 'n' }] } },
+    });
+    expect(planClaim(c).classes().map((k) => k.key)).toEqual(['n=3,p=1', 'n=3,p=2']);
+  });
+});
