@@ -85,3 +85,20 @@ export function valuesText(values: Readonly<Record<string, number>>): string {
   const s = Object.entries(values).map(([k, v]) => `${k}=${v}`).join(',');
   return s || '(no variables)';
 }
+
+/** Every integer point of the box, in order, up to `limit` points (a claim's boxes are small in practice). */
+export function* boxPoints(ranges: Ranges, limit = 200_000): Generator<Record<string, number>> {
+  const entries = Object.entries(ranges);
+  let produced = 0;
+  function* go(k: number, acc: Record<string, number>): Generator<Record<string, number>> {
+    if (produced >= limit) return;
+    if (k === entries.length) {
+      produced++;
+      yield { ...acc };
+      return;
+    }
+    const [name, r] = entries[k]!;
+    for (let x = r.min; x <= r.max; x++) yield* go(k + 1, { ...acc, [name]: x });
+  }
+  yield* go(0, {});
+}

@@ -1,6 +1,6 @@
 import { isBuiltinTheory, makeRegion, theoryPieceSet, type PieceSet } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
-import { addAffine, boxCorners, constantAffine, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
+import { addAffine, boxCorners, boxPoints, constantAffine, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
 import { stepSideMap } from './boundary-transform.js';
 import type { Claim, TheoryInput } from './claim-schema.js';
 import { hasIntegerWeights, pieceSetFromJson } from './resolve-theory.js';
@@ -85,6 +85,11 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   };
   // An affine condition holds on the whole box iff it holds at every corner.
   const cornerWhere = (pred: (v: Record<string, number>) => boolean) => corners.find((c) => !pred(c));
+  // Conditions involving N = max(N_left, N_right) are not convex, so those are checked at every point.
+  const pointWhere: CornerWhere = (pred) => {
+    for (const v of boxPoints(ranges)) if (!pred(v)) return v;
+    return undefined;
+  };
 
   const lengths = claim.family.sides.map((s, i) => expr(s, `family.sides[${i}]`));
   lengths.forEach((l, i) => {
@@ -107,7 +112,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const { sameContent, counts } = compileConditions(claim, lengths, left, expr, cornerWhere, fail);
   const transformedLengths = checkTransform(claim, lengths, left, cornerWhere, fail);
   const polynomial = claim.compare.measure.type === 'value' && !(hasIntegerWeights(left) && hasIntegerWeights(right));
-  checkCompare(claim, { left, right, polynomial, lengths, transformedLengths, expr, cornerWhere, fail });
+  checkCompare(claim, { left, right, polynomial, lengths, transformedLengths, expr, cornerWhere, pointWhere, fail });
   return { claim, left, right, variables, ranges, lengths, transformedLengths, sameContent, counts, polynomial };
 }
 
@@ -216,6 +221,7 @@ interface CompareContext {
   transformedLengths: Affine[];
   expr: (i: ExpressionInput, p: string) => Affine;
   cornerWhere: CornerWhere;
+  pointWhere: CornerWhere;
   fail: Fail;
 }
 
@@ -258,14 +264,14 @@ function checkCompare(claim: Claim, c: CompareContext): void {
       if (s.type === 'explicit') {
         const sorted = [...s.images].sort((a, b) => a - b);
         if (sorted.some((x, i) => x !== i + 1)) c.fail(`Images: expected a permutation of 1..${s.images.length}, received [${s.images.join(',')}]`, `${path}.images`);
-        const bad = c.cornerWhere((v) => s.images.length <= n(v));
+        const bad = c.pointWhere((v) => s.images.length <= n(v));
         if (bad) c.fail(`Images: expected at most N = ${n(bad)} entries, received ${s.images.length} at ${valuesText(bad)}`, `${path}.images`, 'N = s6+s1+s2 of the larger completed triangle');
         return;
       }
       const from = c.expr(s.from, `${path}.from`);
       const to = c.expr(s.to, `${path}.to`);
       if (s.type === 'shiftBlock') c.expr(s.by, `${path}.by`);
-      const bad = c.cornerWhere((v) => 1 <= evalAffine(from, v) && evalAffine(from, v) <= evalAffine(to, v) && evalAffine(to, v) <= n(v));
+      const bad = c.pointWhere((v) => 1 <= evalAffine(from, v) && evalAffine(from, v) <= evalAffine(to, v) && evalAffine(to, v) <= n(v));
       if (bad) {
         c.fail(
           `Substitution block: expected 1 ≤ from ≤ to ≤ N, received from = ${evalAffine(from, bad)}, to = ${evalAffine(to, bad)}, N = ${n(bad)} at ${valuesText(bad)}`,
