@@ -95,6 +95,8 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
         left: show(left, compiled.left.name, lengths, sides),
         right: right ? show(right, compiled.right.name, t.lengths, t.sides) : unmeasured(compiled.right.name, t.lengths, t.sides, '(not computed)'),
         method: mode,
+        // "is zero" was itself a modular identity test, with the same kind of error bound
+        ...(mode === 'modular' ? { errorBound: errorBoundOf(left, right ?? left) } : {}),
       };
     }
     if (permutationSearch && left.kind === 'poly' && right.kind === 'poly') {

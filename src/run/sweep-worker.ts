@@ -83,7 +83,10 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
         common = common ? new Map([...common].filter(([k]) => here.has(k))) : here;
         truncated ||= r.permutationsTruncated === true;
       }
-    } else if (r.status === 'skipped_zero') out.skippedZero++;
+    } else if (r.status === 'skipped_zero') {
+      out.skippedZero++;
+      if (r.method === 'modular') out.errorBound += r.errorBound ?? 0;
+    }
     else out.paired++;
   }
   const commonPermutations = common ? [...common.values()] : undefined;
