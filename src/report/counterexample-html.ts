@@ -36,11 +36,11 @@ function boundaryFigure(role: 'left' | 'right', b: ReportBoundary, resolve: Piec
 }
 
 /** One counterexample drawn in full: both boundaries, both values, every puzzle (up to `puzzleLimit` each). */
-export function counterexampleCardHtml(c: ReportCounterexample, number: number, resolve: PieceSetResolver, puzzleLimit: number): string {
+export function counterexampleCardHtml(c: ReportCounterexample, number: number, resolve: PieceSetResolver, puzzleLimit: number, fails = '≠'): string {
   const perm = c.permutation ? `<span>permutation [${c.permutation.join(', ')}]</span>` : '';
   return [
     `<article class="cx" data-counterexample="${number}">`,
-    `<header><h3>Counterexample ${number} <span class="value">${valueHtml(c.left.value)}</span><span class="ne">≠</span><span class="value">${valueHtml(c.right.value)}</span></h3>`,
+    `<header><h3>Counterexample ${number} <span class="value">${valueHtml(c.left.value)}</span><span class="ne">${escapeXml(fails)}</span><span class="value">${valueHtml(c.right.value)}</span></h3>`,
     `<span>class ${escapeXml(c.classKey)} · instance ${c.index} · side lengths ${c.left.lengths.join(',')} · size ${c.size}</span>${perm}</header>`,
     `<div class="pair">${boundaryFigure('left', c.left, resolve, puzzleLimit)}${boundaryFigure('right', c.right, resolve, puzzleLimit)}</div>`,
     '</article>',

@@ -37,6 +37,16 @@ function tally(data: ReportData): string {
   return `<section class="tally">${verdict}<div><strong>${fmt(checked)}</strong>instances checked</div><div><strong>${verified} / ${data.classes.length}</strong>classes verified</div><div><strong>${fmt(n)}</strong>counterexamples</div></section>`;
 }
 
+// How a counterexample's two values fail the claim's relation: ≠ for equalities, > for ≤, < for ≥.
+function failureSymbol(json: unknown): string {
+  const type = (json as { compare?: { relation?: { type?: string } } } | null)?.compare?.relation?.type;
+  if (type === 'lessOrEqual') return '>';
+  if (type === 'greaterOrEqual') return '<';
+  if (type === 'equalAfterSubstitution') return '≠ σ';
+  if (type === 'equalUpToPermutation') return '≠ any σ';
+  return '≠';
+}
+
 /** The whole report as one self-contained HTML page: inline style, inline SVG, no scripts, no external assets. */
 export function renderHtmlReport(data: ReportData, options: HtmlReportOptions = {}): string {
   const drawCount = options.drawCount ?? 6;
@@ -54,7 +64,7 @@ export function renderHtmlReport(data: ReportData, options: HtmlReportOptions = 
     classes.length ? `<div class="classes">${classTable(classes)}${classChartSvg(classes)}</div>` : '<p class="note">no class swept yet</p>',
     `<h2>Counterexamples${cxs.length ? `, smallest first` : ''}</h2>`,
     cxs.length ? '' : '<p class="note">none found</p>',
-    ...shown.map((c, k) => counterexampleCardHtml(c, k + 1, resolve, options.puzzleLimit ?? 24)),
+    ...shown.map((c, k) => counterexampleCardHtml(c, k + 1, resolve, options.puzzleLimit ?? 24, failureSymbol(claim.json))),
     rest.length ? `<h2>${fmt(rest.length)} more counterexamples</h2>${counterexampleTableHtml(rest, drawCount + 1)}` : '',
     `<h2>Claim</h2><details open><summary>claim JSON</summary><pre>${escapeXml(JSON.stringify(claim.json, null, 2))}</pre></details>`,
     `<footer>puzzlesweep report${data.generatedAt ? ` · data read ${escapeXml(data.generatedAt)}` : ''} · puzzle drawings: pieces filled by kind, boundary labels outside the region in clockwise order, rhombus weights y<sub>j</sub> − y<sub>i</sub>, K-piece signs in discs</footer>`,
