@@ -1,5 +1,5 @@
 import { polyTerms, polyText } from '../engine/index.js';
-import type { CountResult, RegionValue } from '../run/count-region.js';
+import type { CountResult, RegionValue } from '../claims/count-region.js';
 
 /** Stable JSON of a value: a decimal string, or `{text, terms:[{coefficient, exponents}]}` for polynomials. */
 export function valueJson(v: RegionValue): unknown {

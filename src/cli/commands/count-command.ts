@@ -2,7 +2,7 @@ import type { CommandModule } from 'yargs';
 import { resolveTheory } from '../../claims/resolve-theory.js';
 import { generatingSemiring } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
-import { countRegion } from '../../run/count-region.js';
+import { countRegion } from '../../claims/count-region.js';
 import { parseBoundaryArgs } from '../boundary-args.js';
 import { runCommand } from '../run-command.js';
 

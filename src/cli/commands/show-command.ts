@@ -4,7 +4,7 @@ import { resolveTheory } from '../../claims/resolve-theory.js';
 import { drawPuzzleText } from '../../report/text-drawing.js';
 import { boundaryTitle, drawPuzzlesSvg } from '../../report/svg-drawing.js';
 import { drawPuzzlesTikz } from '../../report/tikz-drawing.js';
-import { regionOfSides } from '../../run/count-region.js';
+import { regionOfSides } from '../../claims/count-region.js';
 import { toAppError } from '../../errors.js';
 import { parseBoundaryArgs } from '../boundary-args.js';
 import { runCommand } from '../run-command.js';

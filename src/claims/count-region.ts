@@ -14,7 +14,7 @@ import {
   type SafeInt,
 } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
-import { hasIntegerWeights } from '../claims/resolve-theory.js';
+import { hasIntegerWeights } from './resolve-theory.js';
 
 export type RegionValue =
   | { readonly type: 'integer'; readonly value: SafeInt }
