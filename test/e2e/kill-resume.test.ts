@@ -99,4 +99,20 @@ describe('kill -9 and worker crashes (built CLI, real store files)', () => {
     expect(summary.claims[0]!.instancesChecked).toBe(4680);
     expect(tiling(db)['n=4']).toBe('4096');
   });
+
+  it('two processes sweeping one store at once end with the store of one process, nothing counted twice', async () => {
+    const reference = join(dir, 'single.sqlite');
+    expect(cli(['run', ...ARGS, '--db', reference]).status).toBe(1);
+    const shared = join(dir, 'shared.sqlite');
+    const one = cliAsync(['run', ...ARGS, '--workers', '1', '--db', shared]);
+    const two = cliAsync(['run', ...ARGS, '--workers', '1', '--db', shared]);
+    const codes = await Promise.all([one, two].map((c) => new Promise<number | null>((resolve) => c.on('exit', (code) => resolve(code)))));
+    expect(codes).toEqual([1, 1]);
+    expect(outcome(shared)).toEqual(outcome(reference));
+    expect(tiling(shared)).toEqual(tiling(reference));
+    // both runs did part of the work: the chunks were shared, not swept twice
+    const perRun = query<{ n: number }>(shared, "SELECT COUNT(*) AS n FROM chunks WHERE state = 'done' GROUP BY run_id");
+    expect(perRun.length).toBeGreaterThanOrEqual(2);
+    expect(query(shared, "SELECT * FROM chunks WHERE state = 'leased'")).toEqual([]);
+  });
 });
