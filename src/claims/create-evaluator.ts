@@ -51,7 +51,9 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     return c;
   };
 
-  const run = (instance: Instance, exactOnly: boolean, pairing: boolean): InstanceResult => {
+  // `confirming`: an exact recomputation from scratch (no pairing, no cached sweeps), for counterexamples.
+  const run = (instance: Instance, exactOnly: boolean, confirming: boolean): InstanceResult => {
+    const pairing = !confirming;
     const { cls, sigma, m } = classOf(instance.classKey);
     const sides = [...instance.sides];
     const lengths = sides.map((s) => [...s].length);
@@ -79,7 +81,8 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     }
     const permutationSearch = relation.type === 'equalUpToPermutation';
     let mode: Mode = exactOnly || !compiled.polynomial || permutationSearch ? 'exact' : 'modular';
-    const cache = !exactOnly;
+    // Sweeps reuse cached one-pass sweeps in exact mode too; only a confirmation recomputes everything.
+    const cache = !confirming;
     const measureBoth = (mode: Mode): [Value, Value | undefined] => {
       const left = leftMeter.value(lengths, sides, mode, undefined, cache);
       // A zero left value is skipped, unless it stands for its partner too, whose value is the right one here.
@@ -131,8 +134,8 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
   };
 
   return {
-    evaluate: (instance) => run(instance, options.exact, true),
-    confirm: (instance) => run(instance, true, false),
+    evaluate: (instance) => run(instance, options.exact, false),
+    confirm: (instance) => run(instance, true, true),
   };
 }
 
