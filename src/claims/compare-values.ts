@@ -72,16 +72,34 @@ export function findPermutations(space: 'blockReversals' | 'allPermutations', m:
 }
 
 /**
- * Printable and stable-JSON form of a value. `text` and `json` are computed on first read: a sweep
- * reads them only for counterexamples, and building them for every instance dominated its cost.
+ * Printable and stable-JSON form of a value. With `eager` false, `text` and `json` are prototype
+ * getters computed on first read: a sweep reads them only for counterexamples, and building them for
+ * every instance dominated its cost. Such an object must not cross a thread or go through
+ * JSON.stringify; confirmations, which do, are eager plain objects.
  */
-export function measured(theory: string, lengths: readonly number[], sides: readonly string[], v: Value, names: readonly string[]): Measured {
-  let shown: { text: string; json: unknown } | undefined;
-  const show = () => (shown ??= render(lengths, v, names));
-  const out = { theory, lengths: [...lengths], sides: [...sides] } as unknown as Measured;
-  Object.defineProperty(out, 'text', { enumerable: true, get: () => show().text });
-  Object.defineProperty(out, 'json', { enumerable: true, get: () => show().json });
-  return out;
+export function measured(theory: string, lengths: readonly number[], sides: readonly string[], v: Value, names: readonly string[], eager = true): Measured {
+  if (!eager) return new LazyMeasured(theory, lengths, sides, v, names);
+  return { theory, lengths: [...lengths], sides: [...sides], ...render(lengths, v, names) };
+}
+
+class LazyMeasured implements Measured {
+  private shown: { text: string; json: unknown } | undefined;
+
+  constructor(
+    readonly theory: string,
+    readonly lengths: readonly number[],
+    readonly sides: readonly string[],
+    private readonly value: Value,
+    private readonly names: readonly string[],
+  ) {}
+
+  get text(): string {
+    return (this.shown ??= render(this.lengths, this.value, this.names)).text;
+  }
+
+  get json(): unknown {
+    return (this.shown ??= render(this.lengths, this.value, this.names)).json;
+  }
 }
 
 function render(lengths: readonly number[], v: Value, names: readonly string[]): { text: string; json: unknown } {

@@ -90,7 +90,7 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
       return [left, rightMeter.value(t.lengths, t.sides, mode, sigma, cache)];
     };
     let [left, right] = measureBoth(mode);
-    const show = (v: Value, theory: string, ls: readonly number[], ss: readonly string[]) => measured(theory, ls, ss, v, names);
+    const show = (v: Value, theory: string, ls: readonly number[], ss: readonly string[]) => measured(theory, ls, ss, v, names, confirming);
     if (right === undefined || (claim.family.nonzeroOnly && isZeroValue(left) && isZeroValue(right))) {
       return {
         ...base,

@@ -49,10 +49,17 @@ export type Mode = 'exact' | 'modular';
 /** Seed of the modular evaluation point; fixed, so results are reproducible and both sides share the point. */
 export const MODULAR_SEED = 20240601;
 
+function sameButSide5(la: readonly number[], lb: readonly number[], sa: readonly string[], sb: readonly string[]): boolean {
+  for (let i = 0; i < 6; i++) if (la[i] !== lb[i] || (i !== 4 && sa[i] !== sb[i])) return false;
+  return true;
+}
+
 /** Measures boundaries in one theory, caching one sweep per boundary with side 5 left open. */
 export class Meter {
   private readonly cache: LruCache<string, Map<string, unknown>>;
   private readonly modular = new Map<string, Semiring<Residues>>();
+  /** The last sweep used per tag (value, norm, …), for runs of instances that differ only in side 5. */
+  private readonly last = new Map<string, { lengths: readonly number[]; sides: readonly string[]; map: Map<string, unknown> }>();
   readonly polynomial: boolean;
 
   constructor(
@@ -68,6 +75,9 @@ export class Meter {
 
   // One sweep for every side-5 labeling; the cache makes consecutive instances (same sides 1-4, 6) a lookup.
   private completions<T>(tag: string, lengths: readonly number[], sides: readonly string[], options: () => CountOptions<T>, post: (v: T) => unknown, useCache: boolean): Map<string, unknown> {
+    // Consecutive instances usually share everything but side 5: answer those without building a key.
+    const last = this.last.get(tag);
+    if (useCache && last && sameButSide5(last.lengths, lengths, last.sides, sides)) return last.map;
     const key = `${tag}|${lengths.join(',')}|${sides.map((s, i) => (i === 4 ? '' : s)).join('|')}`;
     let map = useCache ? this.cache.get(key) : undefined;
     if (!map) {
@@ -76,6 +86,7 @@ export class Meter {
       for (const [k, v] of raw) map.set(k, post(v));
       if (useCache) this.cache.set(key, map);
     }
+    if (useCache) this.last.set(tag, { lengths, sides, map });
     return map;
   }
 

@@ -29,8 +29,8 @@ const ratio = (a: Measured, b: Measured) => `${(a.perSecond / b.perSecond).toFix
 
 export default async function sweepBenchmark(): Promise<string> {
   const parallelogram = claim('bench-parallelogram', 'cohomology', [3, 7, 0, 3, 7, 0], [{ type: 'exchange', sides: [1, 4] }]);
-  const batched = measure({ kind: 'batched', claim: parallelogram, limit: 4000 });
-  const single = measure({ kind: 'per-instance', claim: parallelogram, limit: 4000 });
+  const batched = measure({ kind: 'batched', claim: parallelogram, limit: 20000 });
+  const single = measure({ kind: 'per-instance', claim: parallelogram, limit: 20000 });
 
   const poolClaim = claim('bench-pool', 'cohomology', [4, 5, 0, 4, 5, 0], [{ type: 'exchange', sides: [1, 4] }]);
   const one = measure({ kind: 'pool', claim: poolClaim, workers: 1, chunkSize: 2000 });

@@ -29,8 +29,9 @@ function inProcess(c: Extract<SweepCase, { limit: number }>): Record<string, unk
   const evaluator = createEvaluator(claim, { exact: c.kind === 'evaluate' ? c.exact : true }, { pairing: false });
   const start = performance.now();
   let holds = 0;
-  for (let i = 0n; i < BigInt(n); i++) {
-    const inst = plan.instanceAt(cls, i);
+  // The batched path walks instances as a sweep's worker does; the baseline names each one afresh.
+  const walk = c.kind === 'per-instance' ? Array.from({ length: n }, (_, i) => plan.instanceAt(cls, BigInt(i))) : plan.instancesFrom(cls, 0n, BigInt(n));
+  for (const inst of walk) {
     if (c.kind === 'per-instance') {
       // The baseline: one closed-boundary DP for b and one for T(b), no shared sweeps.
       const t = applyTransform(claim.transform, cls.lengths, inst.sides, pieces);
