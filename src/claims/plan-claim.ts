@@ -19,7 +19,7 @@ interface Group {
   readonly contents: readonly Content[];
   readonly size: bigint;
   /** Contents keyed by their counts joined with commas. */
-  readonly byContent: ReadonlyMap<string, Content>;
+  readonly byContent: ReadonlyMap<number, Content>;
 }
 
 interface Layout {
@@ -80,12 +80,17 @@ function layoutOf(compiled: CompiledClaim, cls: SizeClass): Layout {
       offset += size;
       return entry;
     });
-    groups.push({ sides: members, contents, size: offset, byContent: new Map(contents.map((c) => [c.counts.join(','), c])) });
+    groups.push({ sides: members, contents, size: offset, byContent: new Map(contents.map((c) => [packCounts(c.counts, length), c])) });
   }
   // The group holding side 5 is least significant, so runs of consecutive indices vary side 5 only.
   const five = groups.findIndex((g) => g.sides.includes(4));
   const ordered = [...groups.slice(0, five), ...groups.slice(five + 1), groups[five]!];
   return { cls, groups: ordered, count: ordered.reduce((p, g) => p * g.size, 1n) };
+}
+
+/** The packed content key of counts for strings of one length (see `contentKey` in planClaim). */
+function packCounts(counts: readonly number[], length: number): number {
+  return counts.reduce((key, c, a) => key + c * (length + 1) ** a, 0);
 }
 
 function sizeClassFor(compiled: CompiledClaim, values: Readonly<Record<string, number>>): SizeClass {
@@ -116,10 +121,11 @@ export function planClaim(claim: Claim): ClaimPlanExt {
   const alphabet = compiled.left.boundaryLabels;
   // Boundary labels are single characters, so a side is read one char per edge.
   const labelIndex = new Map(alphabet.map((a, i) => [a, i]));
+  // A side's content packed in one number (label a counts (length+1)^a), compared without allocating.
   const contentKey = (labels: readonly number[]) => {
-    const counts = new Array<number>(alphabet.length).fill(0);
-    for (const a of labels) counts[a]!++;
-    return counts.join(',');
+    let key = 0;
+    for (const a of labels) key += (labels.length + 1) ** a;
+    return key;
   };
   const layouts = new Map<string, Layout>();
   const layout = (cls: SizeClass) => {
