@@ -22,7 +22,7 @@ function claimText(c: ClaimSummary): string[] {
   }
   if (c.permutations) {
     lines.push(
-      `  permutations found for ${c.permutations.instances} instances: ${c.permutations.distinct === 1 ? `one serves all: [${c.permutations.common!.join(',')}]` : `${c.permutations.distinct} different ones`}`,
+      `  permutations found for ${c.permutations.instances} instances: ${c.permutations.distinct === 1 ? `the first one found is the same for all: [${c.permutations.common!.join(',')}]` : `the first one found takes ${c.permutations.distinct} values (an instance may have several; the class lines above list those serving a whole class)`}`,
     );
   }
   if (c.counterexamples) lines.push(`  ${c.counterexamples} counterexamples stored`);
