@@ -8,6 +8,7 @@ import { runSweep } from '../../run/run-sweep.js';
 import { runCommand } from '../run-command.js';
 import { sweepProgressBar } from '../sweep-progress-bar.js';
 import { sweepSummaryText } from '../sweep-summary-text.js';
+import { writeClaimReport } from '../write-claim-report.js';
 
 /** The demo's own store; it is rebuilt on every demo so the demo always shows a full sweep. */
 export const DEMO_STORE = 'results/demo.sqlite';
@@ -30,6 +31,7 @@ export const demoCommand: CommandModule<object, { workers?: number }> = {
       const summary = await runSweep({ claims, options, onProgress: bar.onProgress });
       bar.stop();
       const failing = summary.claims.filter((c) => c.counterexamples > 0).map((c) => c.claimId);
+      const reports = failing.map((id) => writeClaimReport(DEMO_STORE, id, { draw: 6 }).out);
       process.stdout.write(
         [
           sweepSummaryText(summary),
@@ -38,6 +40,7 @@ export const demoCommand: CommandModule<object, { workers?: number }> = {
           `  node dist/cli/main.js status --db ${DEMO_STORE}`,
           ...failing.map((id) => `  node dist/cli/main.js counterexamples ${id} --db ${DEMO_STORE} --smallest`),
           `or with any SQLite client (tables are described in README.md, "The store").`,
+          ...(reports.length ? ['', 'Reports with the counterexamples drawn (open them in a browser):', ...reports.map((r) => `  ${r}`)] : []),
           '',
         ].join('\n'),
       );

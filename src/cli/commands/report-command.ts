@@ -1,11 +1,8 @@
 import type { CommandModule } from 'yargs';
 import { AppError } from '../../errors.js';
-import { renderHtmlReport } from '../../report/html-report.js';
-import { reportDataFromStore } from '../../report/store-report-data.js';
 import { DEFAULT_STORE_PATH } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
-import { openExistingStore, storedClaims } from '../stored-claims.js';
-import { writeOutputFile } from '../write-output-file.js';
+import { writeClaimReport } from '../write-claim-report.js';
 
 interface ReportArgs {
   claim: string;
@@ -28,22 +25,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       if (!Number.isInteger(args.draw) || args.draw < 0) {
         throw new AppError('invalid_argument', `--draw: expected a nonnegative integer, received ${args.draw}`, { path: '--draw' });
       }
-      const db = openExistingStore(args.db);
-      let html: string;
-      let id: string;
-      let found: number;
-      try {
-        // A claim file names its current version; an id names the newest stored version.
-        const record = storedClaims(db, args.claim).claims[0]!;
-        const { data, resolve } = reportDataFromStore(db, record);
-        html = renderHtmlReport(data, { drawCount: args.draw, resolve });
-        id = record.claimId;
-        found = data.counterexamples.length;
-      } finally {
-        db.close();
-      }
-      const out = args.out ?? `results/${id.replace(/[^\w.-]+/g, '_')}.html`;
-      writeOutputFile(out, html, '--out');
-      process.stdout.write(`wrote ${out} (${found} counterexample${found === 1 ? '' : 's'}, ${Math.min(found, args.draw)} drawn)\n`);
+      const { out, found, drawn } = writeClaimReport(args.db, args.claim, { out: args.out, draw: args.draw });
+      process.stdout.write(`wrote ${out} (${found} counterexample${found === 1 ? '' : 's'}, ${drawn} drawn)\n`);
     }),
 };
