@@ -25,10 +25,11 @@ function weightTable<T>(plan: TransferPlan, semiring: Semiring<T>, weigher: Weig
 }
 
 /** Runs the sweep (packed numeric profiles when they fit, strings otherwise) and returns the final profiles (line 0, left to right) with their values. */
-export function sweep<T>(plan: TransferPlan, options: CountOptions<T>): Map<string, T> {
+export function sweep<T>(plan: TransferPlan, options: CountOptions<T>, profiles: 'auto' | 'strings' = 'auto'): Map<string, T> {
   const { semiring } = options;
   const weights = weightTable(plan, semiring, options.weigher ?? declaredWeigher(semiring));
-  if (fitsNumeric(plan)) return sweepNumeric(plan, semiring, weights);
+  if (profiles === 'auto' && fitsNumeric(plan)) return sweepNumeric(plan, semiring, weights);
+  // String profiles: any alphabet and any width (and the reference the packed path is tested against).
   let state = new Map<string, T>([[plan.initial, semiring.one]]);
   plan.steps.forEach((step, s) => {
     const next = new Map<string, T>();

@@ -12,7 +12,10 @@ import {
   theoryPieceSet,
   triangleRegion,
   makeRegion,
+  checkBoundary,
+  sweep,
 } from '../../../src/engine/index.js';
+import { compilePlan } from '../../../src/engine/transfer-plan.js';
 import { binaryStrings, stringOfPartition } from '../../support/boundaries.js';
 
 const count = (theory: string, l: string, m: string, n: string) =>
@@ -106,6 +109,25 @@ describe('exactness', () => {
       const region = makeRegion(lengths);
       const sides = lengths.map((s) => '0'.repeat(s));
       expect(countBoundary(region, sides, theoryPieceSet('cohomology'), { semiring: fillingCountSemiring })).toBe(1);
+    }
+  });
+});
+
+describe('profile encodings', () => {
+  // The packed-integer sweep and the string sweep are two encodings of one recursion: they must agree
+  // on every final profile [common practice, no source].
+  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'])('packed and string profiles agree in %s', (theory) => {
+    const pieces = theoryPieceSet(theory);
+    for (const lengths of [[5, 0, 5, 0, 5, 0], [2, 2, 2, 2, 2, 2], [3, 2, 0, 3, 2, 0]]) {
+      const region = makeRegion(lengths);
+      const sides = lengths.map((n, i) => (i === 4 ? null : '01'.repeat(n).slice(0, n)));
+      const plan = compilePlan(region, checkBoundary(region, sides, pieces), pieces);
+      const ring = polynomialSemiring(region.size);
+      const packed = sweep(plan, { semiring: ring });
+      const strings = sweep(plan, { semiring: ring }, 'strings');
+      expect(packed.size, `${lengths}`).toBeGreaterThan(0);
+      expect([...packed.keys()].sort()).toEqual([...strings.keys()].sort());
+      for (const [k, v] of packed) expect(ring.equals(v, strings.get(k)!)).toBe(true);
     }
   });
 });
