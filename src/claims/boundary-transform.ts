@@ -84,6 +84,12 @@ export function isIdentityMap(m: SideMap): boolean {
 }
 
 function renameLabels(s: string, map: Readonly<Record<string, string>>): string {
+  let renames = false;
+  for (const _ in map) {
+    renames = true;
+    break;
+  }
+  if (!renames) return s;
   let out = '';
   for (const c of s) out += map[c] ?? c;
   return out;

@@ -1,6 +1,6 @@
 import { AppError } from '../errors.js';
 import { evalAffine } from './affine.js';
-import { applyTransform, composeSideMaps, isIdentityMap, transformSideMap } from './boundary-transform.js';
+import { applySideMap, applyTransform, composeSideMaps, isIdentityMap, transformSideMap } from './boundary-transform.js';
 import type { EvaluateOptions, Evaluator, Instance, InstanceResult, Measured, SizeClass } from './claim-api.js';
 import type { Claim } from './claim-schema.js';
 import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measured, relationHolds } from './compare-values.js';
@@ -38,6 +38,8 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     isIdentityMap(composeSideMaps(sideMap, sideMap)) &&
     sameTheory &&
     (relation.type === 'equal' || relation.type === 'equalAfterSubstitution');
+  // Boundary labels of one UTF-16 unit (all but exotic ones) let a side's length be its string length.
+  const singleUnitLabels = compiled.left.boundaryLabels.every((l) => l.length === 1);
   const classes = new Map<string, { cls: SizeClass; sigma: Permutation | undefined; m: number }>();
   const classOf = (key: string) => {
     let c = classes.get(key);
@@ -56,11 +58,12 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     const pairing = !confirming;
     const { cls, sigma, m } = classOf(instance.classKey);
     const sides = [...instance.sides];
-    const lengths = sides.map((s) => [...s].length);
+    const lengths = sides.map((s) => (singleUnitLabels ? s.length : [...s].length));
     if (lengths.some((l, i) => l !== cls.lengths[i])) {
       throw new AppError('invalid_argument', `Instance sides: expected lengths ${cls.lengths.join(',')} of class ${cls.key}, received ${lengths.join(',')}`, { path: '--instance' });
     }
-    const t = applyTransform(claim.transform, lengths, sides, compiled.left);
+    // The steps compose to one side map unless one completes to a triangle.
+    const t = sideMap ? applySideMap(sideMap, lengths, sides) : applyTransform(claim.transform, lengths, sides, compiled.left);
     const base = { classKey: instance.classKey, index: instance.index };
     let pairable = false;
     // `pairable` is decided the same way with and without pairing, so that confirm() answers the question

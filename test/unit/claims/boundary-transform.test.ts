@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { applyTransform } from '../../../src/claims/index.js';
+import { applySideMap, transformSideMap } from '../../../src/claims/boundary-transform.js';
+import type { TransformStep } from '../../../src/claims/index.js';
 import { countBoundary, integerSemiring, makeRegion, theoryPieceSet } from '../../../src/engine/index.js';
 
 const cohomology = theoryPieceSet('cohomology');
@@ -69,6 +71,23 @@ describe('transforms on boundaries', () => {
         expect(value('cohomology', r60)).toEqual(value('cohomology', sides));
         expect(value('dual-k-theory', r60)).toEqual(value('k-theory', sides));
       }
+    }
+  });
+});
+
+describe('composed side maps', () => {
+  // The evaluator applies the steps' composed side map in one pass; it must equal applying the steps in
+  // order [composition of maps, common practice].
+  it('equal the steps applied one by one', () => {
+    const b = ['01', '1', '10', '0', '11', '0'];
+    const programs: TransformStep[][] = [
+      [{ type: 'rotate', degrees: 60 }, { type: 'mirror' }],
+      [{ type: 'mirror' }, { type: 'complement', sides: [1, 3] }, { type: 'rotate', degrees: 120 }],
+      [{ type: 'reverse', sides: [2, 5] }, { type: 'rotate', degrees: 240 }, { type: 'complement', sides: 'all' }, { type: 'mirror' }],
+    ] as TransformStep[][];
+    for (const steps of programs) {
+      const map = transformSideMap(steps)!;
+      expect(applySideMap(map, lengthsOf(b), b)).toEqual(applyTransform(steps, lengthsOf(b), b, cohomology));
     }
   });
 });
