@@ -69,18 +69,21 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     // `pairable` is decided the same way with and without pairing, so that confirm() answers the question
     // evaluate() asked: a zero left value that stands for its nonzero partner is still compared.
     if (involutive && (sigma === undefined || isInvolution(sigma)) && t.lengths.every((l, i) => l === lengths[i])) {
-      const partner = plan.indexOf(cls, t.sides);
-      if (pairing && partner !== undefined && partner < instance.index) {
+      // sign of index(T(b)) − index(b); the partner's own index is ranked only if someone reads it
+      const order = plan.compareIndex(cls, t.sides, sides);
+      if (pairing && order !== undefined && order < 0) {
         return {
           ...base,
           status: 'paired',
-          partnerIndex: partner,
+          get partnerIndex() {
+            return plan.indexOf(cls, t.sides);
+          },
           left: unmeasured(compiled.left.name, lengths, sides, '(paired)'),
           right: unmeasured(compiled.right.name, t.lengths, t.sides, '(paired)'),
           method: 'exact',
         };
       }
-      pairable = partner !== undefined && partner > instance.index;
+      pairable = order !== undefined && order > 0;
     }
     const permutationSearch = relation.type === 'equalUpToPermutation';
     let mode: Mode = exactOnly || !compiled.polynomial || permutationSearch ? 'exact' : 'modular';

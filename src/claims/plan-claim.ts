@@ -33,6 +33,8 @@ interface Layout {
 export interface ClaimPlanExt extends ClaimPlan {
   readonly compiled: CompiledClaim;
   instancesFrom(cls: SizeClass, start: bigint, end: bigint): Iterable<Instance>;
+  /** The sign of index(a) − index(b) without ranking either, or undefined when one is not an instance of `cls`. */
+  compareIndex(cls: SizeClass, a: readonly string[], b: readonly string[]): number | undefined;
   /** The class of given variable values (whatever the bounds), e.g. to resolve an `Instance.classKey`. */
   classForKey(key: string): SizeClass;
 }
@@ -88,6 +90,11 @@ function layoutOf(compiled: CompiledClaim, cls: SizeClass): Layout {
   return { cls, groups: ordered, count: ordered.reduce((p, g) => p * g.size, 1n) };
 }
 
+function compareLabels(a: readonly number[], b: readonly number[]): number {
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return a[k]! < b[k]! ? -1 : 1;
+  return 0;
+}
+
 /** The packed content key of counts for strings of one length (see `contentKey` in planClaim). */
 function packCounts(counts: readonly number[], length: number): number {
   return counts.reduce((key, c, a) => key + c * (length + 1) ** a, 0);
@@ -126,6 +133,24 @@ export function planClaim(claim: Claim): ClaimPlanExt {
     let key = 0;
     for (const a of labels) key += (labels.length + 1) ** a;
     return key;
+  };
+  const singleUnit = alphabet.every((a) => a.length === 1);
+  // Label indices of the six sides, or undefined when they do not have the class's lengths and alphabet.
+  const labelsOf = (cls: SizeClass, sides: readonly string[]): number[][] | undefined => {
+    if (sides.length !== 6) return undefined;
+    const out: number[][] = [];
+    for (let i = 0; i < 6; i++) {
+      const side = singleUnit ? sides[i]! : [...sides[i]!];
+      if (side.length !== cls.lengths[i]) return undefined;
+      const idx = new Array<number>(side.length);
+      for (let k = 0; k < side.length; k++) {
+        const a = labelIndex.get(side[k]!);
+        if (a === undefined) return undefined;
+        idx[k] = a;
+      }
+      out.push(idx);
+    }
+    return out;
   };
   const layouts = new Map<string, Layout>();
   const layout = (cls: SizeClass) => {
@@ -197,21 +222,30 @@ export function planClaim(claim: Claim): ClaimPlanExt {
         yield previous;
       }
     },
-    indexOf(cls, sides) {
-      if (sides.length !== 6) return undefined;
+    compareIndex(cls, a, b) {
       const l = layout(cls);
-      const labelIdx: number[][] = [];
-      for (let i = 0; i < 6; i++) {
-        const side = sides[i]!;
-        if (side.length !== cls.lengths[i]) return undefined;
-        const idx = new Array<number>(side.length);
-        for (let k = 0; k < side.length; k++) {
-          const a = labelIndex.get(side[k]!);
-          if (a === undefined) return undefined;
-          idx[k] = a;
-        }
-        labelIdx.push(idx);
+      const la = labelsOf(cls, a);
+      const lb = labelsOf(cls, b);
+      if (!la || !lb) return undefined;
+      // index = mixed radix over groups (most significant first) of (content offset, ranks of its sides),
+      // and ranks within a content follow lexicographic order: compare digit by digit, no ranking needed.
+      let verdict = 0;
+      for (const group of l.groups) {
+        const ka = contentKey(la[group.sides[0]!]!);
+        const kb = contentKey(lb[group.sides[0]!]!);
+        const ca = group.byContent.get(ka);
+        const cb = group.byContent.get(kb);
+        if (!ca || !cb || group.sides.some((s) => contentKey(la[s]!) !== ka || contentKey(lb[s]!) !== kb)) return undefined;
+        if (verdict !== 0) continue;
+        if (ca !== cb) verdict = ca.offset < cb.offset ? -1 : 1;
+        else for (const s of group.sides) if ((verdict = compareLabels(la[s]!, lb[s]!)) !== 0) break;
       }
+      return verdict;
+    },
+    indexOf(cls, sides) {
+      const l = layout(cls);
+      const labelIdx = labelsOf(cls, sides);
+      if (!labelIdx) return undefined;
       let index = 0n;
       for (const group of l.groups) {
         const key = contentKey(labelIdx[group.sides[0]!]!);

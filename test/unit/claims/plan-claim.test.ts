@@ -37,6 +37,19 @@ function checkBijection(plan: ReturnType<typeof planClaim>, cls: SizeClass, acce
   const walked = [...plan.instancesFrom(cls, from, n)];
   expect(walked.map((x) => x.index)).toEqual(Array.from({ length: Number(n - from) }, (_, k) => from + BigInt(k)));
   for (const x of walked) expect(x.sides).toEqual(plan.instanceAt(cls, x.index).sides);
+  // a boundary outside the class has no index and no position
+  const outside = allBoundaries(cls.lengths, alphabet).find((b) => !accept(b));
+  if (outside) {
+    expect(plan.indexOf(cls, outside)).toBeUndefined();
+    expect(plan.compareIndex(cls, plan.instanceAt(cls, 0n).sides, outside)).toBeUndefined();
+  }
+  // comparing two instances' positions without ranking them agrees with their indices
+  const step = n > 40n ? n / 40n : 1n;
+  for (let i = 0n; i < n; i += step)
+    for (let j = 0n; j < n; j += step) {
+      const sign = i < j ? -1 : i > j ? 1 : 0;
+      expect(plan.compareIndex(cls, plan.instanceAt(cls, i).sides, plan.instanceAt(cls, j).sides)).toBe(sign);
+    }
 }
 
 describe('multiset ranking', () => {
