@@ -17,6 +17,8 @@ export interface RunRecord {
   readonly instancesChecked: number;
   readonly holds: number;
   readonly counterexamples: number;
+  /** A `running` run whose process is gone (killed); the next run on the store reaps it. */
+  readonly abandoned: boolean;
 }
 
 // A run on another host counts as dead once its heartbeat is this old (on this host the pid decides).
@@ -56,6 +58,12 @@ function pidAlive(pid: number): boolean {
   }
 }
 
+// On this host the pid decides; elsewhere a stale heartbeat does.
+function looksDead(r: { host: string; pid: number; heartbeat_at: string }): boolean {
+  if (r.host === hostname()) return !pidAlive(r.pid);
+  return Date.now() - Date.parse(r.heartbeat_at) > STALE_HEARTBEAT_MS;
+}
+
 /** Marks runs whose process is gone (kill -9, power loss) interrupted and frees their leased chunks. */
 export function reapDeadRuns(db: Store, ownRuns: ReadonlySet<number> = new Set()): number {
   const here = hostname();
@@ -67,11 +75,7 @@ export function reapDeadRuns(db: Store, ownRuns: ReadonlySet<number> = new Set()
         pid: number;
         heartbeat_at: string;
       }[];
-      const dead = rows.filter((r) => {
-        if (ownRuns.has(r.run_id)) return false;
-        if (r.host === here) return r.pid === process.pid || !pidAlive(r.pid);
-        return Date.now() - Date.parse(r.heartbeat_at) > STALE_HEARTBEAT_MS;
-      });
+      const dead = rows.filter((r) => !ownRuns.has(r.run_id) && (r.pid === process.pid && r.host === here ? true : looksDead(r)));
       for (const r of dead) {
         db.prepare(`DELETE FROM chunks WHERE run_id = ? AND state = 'leased'`).run(r.run_id);
         db.prepare(`UPDATE runs SET status = 'interrupted', stop_reason = 'signal', ended_at = heartbeat_at WHERE run_id = ?`).run(r.run_id);
@@ -94,5 +98,6 @@ export function listRuns(db: Store, fingerprint: string, limit = 1): RunRecord[]
     instancesChecked: r.instances_checked as number,
     holds: r.holds as number,
     counterexamples: r.counterexamples as number,
+    abandoned: r.status === 'running' && looksDead(r as { host: string; pid: number; heartbeat_at: string }),
   }));
 }

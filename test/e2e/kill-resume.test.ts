@@ -55,6 +55,8 @@ describe('kill -9 and worker crashes (built CLI, real store files)', () => {
     const atKill = query<{ status: string }>(killed, 'SELECT status FROM runs')[0]!;
     expect(atKill.status).toBe('running'); // killed mid-sweep, so the kill really interrupted work
     expect(doneAtKill).toBeGreaterThanOrEqual(40);
+    // status tells the killed run apart from a live one [definition of the status command]
+    expect(cli(['status', CLAIM, '--db', killed]).stdout).toContain('its process is gone');
 
     const resumed = cli(['run', ...ARGS, '--db', killed]);
     expect(resumed.status).toBe(1);

@@ -30,7 +30,7 @@ function statusText(s: ReturnType<typeof claimStatus>): string {
   lines.push(`  verified classes: ${s.verified.length ? s.verified.map((v) => `${v.classKey} [${v.method}]`).join('; ') : 'none'}`);
   lines.push(`  counterexamples: ${s.counterexamples}${s.smallestCounterexample ? ` (smallest in class ${s.smallestCounterexample.classKey}, index ${s.smallestCounterexample.index})` : ''}`);
   const r = s.lastRun;
-  lines.push(r ? `  last run ${r.runId}: ${r.status}${r.stopReason && r.stopReason !== 'finished' ? ` (${r.stopReason.replace(/_/g, ' ')})` : ''}, started ${r.startedAt}, ${r.instancesChecked} instances checked` : '  no runs');
+  lines.push(r ? `  last run ${r.runId}: ${r.abandoned ? 'running, but its process is gone (killed?); the next run frees its chunks and resumes' : r.status}${r.stopReason && r.stopReason !== 'finished' ? ` (${r.stopReason.replace(/_/g, ' ')})` : ''}, started ${r.startedAt}, ${r.instancesChecked} instances checked` : '  no runs');
   return lines.join('\n');
 }
 
