@@ -86,8 +86,9 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   let stop: StopReason | undefined;
   try {
     const rechecked = await recheckCounterexamples(db, ctx.pool, base, states.map((s) => s.cls), runId);
-    const failing = new Set(listCounterexamples(db, claim.fingerprint).filter((c) => c.recheck !== 'holds').map((c) => c.classKey));
-    let known = failing.size === 0 ? 0 : listCounterexamples(db, claim.fingerprint).filter((c) => c.recheck !== 'holds').length;
+    const standing = listCounterexamples(db, claim.fingerprint).filter((c) => c.recheck !== 'holds');
+    const failing = new Set(standing.map((c) => c.classKey));
+    let known = standing.length;
     let firstFail = states.findIndex((s) => failing.has(s.cls.key));
     if (firstFail < 0) firstFail = Infinity;
     const total = states.reduce((acc, s) => acc + Number(s.count - doneInstances(db, claim.fingerprint, s.cls.key, method)), 0);

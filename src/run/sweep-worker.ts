@@ -1,5 +1,6 @@
 import type { ClaimPlan, Instance, InstanceResult, SizeClass } from '../claims/claim-api.js';
 import type { CounterexampleRecord } from '../store/index.js';
+import { intersectPermutations } from '../store/permutation-records.js';
 import { importClaimRuntime, type ClaimRuntime } from './claim-runtime-module.js';
 import { serializeError } from './serialize-error.js';
 import type { ChunkResult, ChunkTask, ConfirmTask, WorkerReply, WorkerTask } from './worker-task.js';
@@ -56,7 +57,7 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
   const out = { checked: 0, holds: 0, fails: 0, skippedZero: 0, paired: 0, overturned: 0, errorBound: 0, exact: true };
   const counterexamples: CounterexampleRecord[] = [];
   const permutations: { index: bigint; permutation: readonly number[] }[] = [];
-  let common: Map<string, readonly number[]> | undefined;
+  let common: Map<string, number[]> | undefined;
   let truncated = false;
   const instances: Iterable<Instance> = plan.instancesFrom ? plan.instancesFrom(cls, task.start, task.end) : unranked(plan, cls, task.start, task.end);
   for (const instance of instances) {
@@ -79,8 +80,7 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
       if (r.method === 'modular') out.errorBound += r.errorBound ?? 0;
       if (r.permutation) permutations.push({ index: i, permutation: r.permutation });
       if (r.permutations) {
-        const here = new Map(r.permutations.map((p) => [p.join(','), p]));
-        common = common ? new Map([...common].filter(([k]) => here.has(k))) : here;
+        common = intersectPermutations(common, r.permutations);
         truncated ||= r.permutationsTruncated === true;
       }
     } else if (r.status === 'skipped_zero') {

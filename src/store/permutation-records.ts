@@ -10,6 +10,12 @@ export function permutationSummary(db: Store, fingerprint: string): { instances:
   return { instances, distinct: rows.length, ...(rows.length === 1 ? { common: JSON.parse(rows[0]!.permutation) as number[] } : {}) };
 }
 
+/** Narrows `common` (undefined: nothing yet) to the permutations also in `list`, keyed by their text. */
+export function intersectPermutations(common: Map<string, number[]> | undefined, list: readonly (readonly number[])[]): Map<string, number[]> {
+  const here = new Map(list.map((p) => [p.join(','), [...p]]));
+  return common ? new Map([...common].filter(([k]) => here.has(k))) : here;
+}
+
 /**
  * Permutations serving every instance of a class, intersected over its finished chunks; `lowerBound`
  * when some instance's list was truncated (then more permutations may serve all).
@@ -20,10 +26,6 @@ export function classCommonPermutations(db: Store, fingerprint: string, classKey
     .all(fingerprint, classKey) as { c: string; t: number }[];
   if (rows.length === 0) return undefined;
   let common: Map<string, number[]> | undefined;
-  for (const r of rows) {
-    const list = JSON.parse(r.c) as number[][];
-    const here = new Map(list.map((p) => [p.join(','), p]));
-    common = common ? new Map([...common].filter(([k]) => here.has(k))) : here;
-  }
+  for (const r of rows) common = intersectPermutations(common, JSON.parse(r.c) as number[][]);
   return { common: [...common!.values()], lowerBound: rows.some((r) => r.t === 1) };
 }
