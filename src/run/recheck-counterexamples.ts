@@ -27,7 +27,9 @@ export async function recheckCounterexamples(
   const byClass = new Map<string, bigint[]>();
   for (const c of listCounterexamples(db, base.fingerprint)) {
     if (!keys.has(c.classKey)) continue;
-    byClass.set(c.classKey, [...(byClass.get(c.classKey) ?? []), c.index]);
+    const list = byClass.get(c.classKey);
+    if (list) list.push(c.index);
+    else byClass.set(c.classKey, [c.index]);
   }
   let checked = 0;
   let stillFail = 0;
