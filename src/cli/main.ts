@@ -26,7 +26,7 @@ await yargs(hideBin(process.argv))
   .command(reportCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()
-  .fail((msg, err, y) => {
+  .fail((msg, err) => {
     if (err) throw err;
     process.stderr.write(`✖ ${msg}\n  Hint: run 'puzzlesweep --help'\n  [invalid_argument]\n`);
     process.exit(2);
