@@ -1,11 +1,13 @@
 import { defineConfig } from 'vitest/config';
 
-// Unit tests are fast and thread-free; integration and end-to-end tests use real workers, SQLite files
-// and the built CLI, so they get a longer timeout.
+// Three projects: `unit` is pure and fast (no threads, no SQLite files, no child processes), `math` holds
+// the exhaustive cross-checks against independent references, `integration` uses real workers, SQLite
+// files, the built CLI, Chromium and Slurm, so it gets a longer timeout.
 export default defineConfig({
   test: {
     projects: [
       { test: { name: 'unit', include: ['test/unit/**/*.test.ts'], testTimeout: 120_000 } },
+      { test: { name: 'math', include: ['test/math/**/*.test.ts'], testTimeout: 600_000 } },
       {
         test: {
           name: 'integration',
