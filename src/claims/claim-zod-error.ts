@@ -36,7 +36,10 @@ const LABELS: Record<string, string> = {
   type: 'Type',
   boundaryLabels: 'Boundary labels',
   pieces: 'Pieces',
-  labels: 'Piece labels',
+  edges: 'Piece edges',
+  horizontal: 'Horizontal edge label',
+  rising: 'Rising edge label',
+  falling: 'Falling edge label',
   orientations: 'Orientations',
 };
 

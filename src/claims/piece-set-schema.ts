@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { migrateLegacyPieces } from './legacy-pieces.js';
 
 const label = z.string().min(1, 'Label: expected a nonempty string');
 
@@ -8,11 +9,17 @@ export const weightSchema = z.union([
   z.object({ variable: z.string().regex(/^[A-Za-z][A-Za-z0-9_]*$/, 'Variable name: expected a letter followed by letters, digits or _') }).strict(),
 ]);
 
+/** A triangle's three edge labels, named by the direction of the edge: horizontal, rising (/), falling (\). */
+export const edgesSchema = z
+  .object({ horizontal: label, rising: label, falling: label })
+  .strict()
+  .describe('Edge labels by edge direction: horizontal, rising (/) and falling (\\).');
+
 export const pieceSchema = z
   .object({
     name: z.string().optional(),
     kind: z.string().optional(),
-    labels: z.tuple([label, label, label]),
+    edges: edgesSchema,
     orientations: z.array(z.enum(['up', 'down'])).min(1),
     rotations: z.boolean().optional(),
     weight: weightSchema.optional(),
@@ -25,7 +32,8 @@ export const pieceSetSchema = z
     $schema: z.string().optional(),
     name: z.string().min(1),
     boundaryLabels: z.array(z.string()).min(1),
-    pieces: z.array(pieceSchema).min(1),
+    // Files in the old positional form ("labels": [a, b, c]) are rewritten with a deprecation warning.
+    pieces: z.preprocess(migrateLegacyPieces, z.array(pieceSchema).min(1)),
   })
   .strict();
 

@@ -21,7 +21,7 @@ export function pieceSetFromJson(data: unknown, file?: string, prefix = ''): Pie
       name: spec.name,
       boundaryLabels: spec.boundaryLabels,
       pieces: spec.pieces.map((p) => ({
-        labels: p.labels,
+        edges: p.edges,
         orientations: p.orientations,
         ...(p.name !== undefined ? { name: p.name } : {}),
         ...(p.kind !== undefined ? { kind: p.kind } : {}),

@@ -25,11 +25,18 @@ export interface PieceSet {
   readonly pieces: readonly Piece[];
 }
 
-/** A piece as a user states it: one shape, allowed orientations, optionally all three rotations. */
+/** A triangle's edge labels named by the direction of the edge they sit on: horizontal, rising (/), falling (\\). */
+export interface EdgeLabels {
+  readonly horizontal: string;
+  readonly rising: string;
+  readonly falling: string;
+}
+
+/** A piece as a user states it: its edge labels by direction, allowed orientations, optionally all three rotations. */
 export interface PieceSpec {
   readonly name?: string;
   readonly kind?: string;
-  readonly labels: readonly [string, string, string];
+  readonly edges: EdgeLabels;
   readonly orientations: readonly Orientation[];
   readonly rotations?: boolean;
   readonly weight?: WeightSpec;
@@ -50,6 +57,22 @@ const SLOT_DIRECTIONS: Record<Orientation, readonly ['h' | 'r' | 'l', 'h' | 'r' 
   down: ['h', 'r', 'l'],
 };
 
+/** Clockwise label list of a triangle from its labels by direction: up (left, right, bottom), down (top, right, left). */
+export function clockwiseLabels(orientation: Orientation, edges: EdgeLabels): [string, string, string] {
+  return orientation === 'up' ? [edges.rising, edges.falling, edges.horizontal] : [edges.horizontal, edges.rising, edges.falling];
+}
+
+/** Labels by direction of a placed triangle, the inverse of `clockwiseLabels`. */
+export function edgeLabels(orientation: Orientation, labels: readonly [string, string, string]): EdgeLabels {
+  return orientation === 'up'
+    ? { rising: labels[0], falling: labels[1], horizontal: labels[2] }
+    : { horizontal: labels[0], rising: labels[1], falling: labels[2] };
+}
+
+const DIRECTION_NAME = { h: 'horizontal', r: 'rising', l: 'falling' } as const;
+
+const edgeText = (e: EdgeLabels) => `(horizontal ${e.horizontal}, rising ${e.rising}, falling ${e.falling})`;
+
 function rotate(labels: readonly [string, string, string], by: number): [string, string, string] {
   return [labels[by % 3]!, labels[(by + 1) % 3]!, labels[(by + 2) % 3]!];
 }
@@ -66,7 +89,8 @@ export function buildPieceSet(spec: PieceSetSpec): PieceSet {
     }
     for (const orientation of p.orientations) {
       const turns = p.rotations ? [0, 1, 2] : [0];
-      const variants = new Set(turns.map((t) => rotate(p.labels, t).join('\u0000')));
+      const clockwise = clockwiseLabels(orientation, p.edges);
+      const variants = new Set(turns.map((t) => rotate(clockwise, t).join('\u0000')));
       for (const v of variants) {
         const labels = v.split('\u0000') as [string, string, string];
         const key = `${orientation}:${v}`;
@@ -74,7 +98,7 @@ export function buildPieceSet(spec: PieceSetSpec): PieceSet {
         if (earlier !== undefined) {
           throw new EngineError(
             'invalid_piece_set',
-            `Duplicate piece: expected each ${orientation} triangle (${labels.join(', ')}) once, received it in '${earlier}' and '${name}'`,
+            `Duplicate piece: expected each ${orientation} triangle ${edgeText(edgeLabels(orientation, labels))} once, received it in '${earlier}' and '${name}'`,
             `pieces[${i}]`,
             'remove one of them, or give them different labels',
           );
@@ -117,14 +141,14 @@ function checkMatchable(spec: PieceSetSpec, pieces: readonly Piece[]): void {
   const boundary = new Set(spec.boundaryLabels);
   for (const p of pieces) {
     p.labels.forEach((l, s) => {
-      const dir = SLOT_DIRECTIONS[p.orientation][s];
+      const dir = SLOT_DIRECTIONS[p.orientation][s]!;
       const other = p.orientation === 'up' ? 'down' : 'up';
       if (!boundary.has(l) && !present.has(`${other}:${dir}:${l}`)) {
         const index = spec.pieces.findIndex((q) => (q.name ?? '') === p.name);
         throw new EngineError(
           'invalid_piece_set',
-          `Unmatched label: expected some ${other} piece with '${l}' on its ${dir === 'h' ? 'horizontal' : dir === 'r' ? 'up-right' : 'up-left'} edge, received none (piece '${p.name}')`,
-          index >= 0 ? `pieces[${index}].labels` : 'pieces',
+          `Unmatched label: expected some ${other} piece with '${l}' on its ${DIRECTION_NAME[dir]} edge, received none (piece '${p.name}')`,
+          index >= 0 ? `pieces[${index}].edges.${DIRECTION_NAME[dir]}` : 'pieces',
           `'${l}' is not a boundary label, so it must be matched inside; add the matching piece or make '${l}' a boundary label`,
         );
       }

@@ -8,21 +8,21 @@ export type BuiltinTheory = (typeof BUILTIN_THEORIES)[number];
 export const RHOMBUS_LABEL = 'eq';
 
 const COHOMOLOGY: PieceSpec[] = [
-  { name: '0-triangle', labels: ['0', '0', '0'], orientations: ['up', 'down'] },
-  { name: '1-triangle', labels: ['1', '1', '1'], orientations: ['up', 'down'] },
-  { name: '10-triangle', labels: ['0', '10', '1'], orientations: ['up', 'down'], rotations: true },
+  { name: '0-triangle', edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up', 'down'] },
+  { name: '1-triangle', edges: { horizontal: '1', rising: '1', falling: '1' }, orientations: ['up', 'down'] },
+  { name: '10-triangle', edges: { horizontal: '1', rising: '0', falling: '10' }, orientations: ['up', 'down'], rotations: true },
 ];
 
 // The equivariant rhombus is the up triangle Up(x, y+1) on top of Down(x, y); it is stated as two
 // unit triangles joined by a label of their own. Its weight sits on the lower half; the statistic
 // "equivariant" counts rhombi because only the lower half has that kind.
 const EQUIVARIANT_RHOMBUS: PieceSpec[] = [
-  { name: 'equivariant-upper', kind: 'equivariant-upper', labels: ['0', '1', RHOMBUS_LABEL], orientations: ['up'] },
-  { name: 'equivariant', labels: [RHOMBUS_LABEL, '0', '1'], orientations: ['down'], weight: { type: 'position' } },
+  { name: 'equivariant-upper', kind: 'equivariant-upper', edges: { horizontal: RHOMBUS_LABEL, rising: '0', falling: '1' }, orientations: ['up'] },
+  { name: 'equivariant', edges: { horizontal: RHOMBUS_LABEL, rising: '0', falling: '1' }, orientations: ['down'], weight: { type: 'position' } },
 ];
 
-const K_UP: PieceSpec = { name: 'k-piece', labels: ['10', '10', '10'], orientations: ['up'], weight: { type: 'integer', value: -1 } };
-const K_DOWN: PieceSpec = { name: 'k-piece', labels: ['10', '10', '10'], orientations: ['down'], weight: { type: 'integer', value: -1 } };
+const K_UP: PieceSpec = { name: 'k-piece', edges: { horizontal: '10', rising: '10', falling: '10' }, orientations: ['up'], weight: { type: 'integer', value: -1 } };
+const K_DOWN: PieceSpec = { name: 'k-piece', edges: { horizontal: '10', rising: '10', falling: '10' }, orientations: ['down'], weight: { type: 'integer', value: -1 } };
 
 const SPECS: Record<BuiltinTheory, PieceSpec[]> = {
   cohomology: COHOMOLOGY,

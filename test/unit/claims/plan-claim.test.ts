@@ -101,7 +101,7 @@ describe('planClaim', () => {
     const theory = {
       name: 'three',
       boundaryLabels: ['0', '1', '2'],
-      pieces: [{ labels: ['0', '0', '0'], orientations: ['up', 'down'] }, { labels: ['1', '1', '1'], orientations: ['up', 'down'] }, { labels: ['2', '2', '2'], orientations: ['up', 'down'] }],
+      pieces: [{ edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up', 'down'] }, { edges: { horizontal: '1', rising: '1', falling: '1' }, orientations: ['up', 'down'] }, { edges: { horizontal: '2', rising: '2', falling: '2' }, orientations: ['up', 'down'] }],
     };
     const plan = planClaim(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 2, max: 3 }], conditions: [{ type: 'sameContent', sides: [1, 3, 5] }, { type: 'labelCount', side: 5, count: 1, label: '2' }] }, theory));
     const abc = ['0', '1', '2'];

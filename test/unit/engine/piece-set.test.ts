@@ -29,15 +29,15 @@ describe('built-in theories', () => {
 
 describe('custom piece sets', () => {
   const base: PieceSetSpec['pieces'] = [
-    { labels: ['0', '0', '0'], orientations: ['up', 'down'] },
-    { labels: ['1', '1', '1'], orientations: ['up', 'down'] },
+    { edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up', 'down'] },
+    { edges: { horizontal: '1', rising: '1', falling: '1' }, orientations: ['up', 'down'] },
   ];
 
   it('expands rotations and keeps weights', () => {
     const set = buildPieceSet({
       name: 'two-step',
       boundaryLabels: ['0', '1', '2'],
-      pieces: [...base, { name: 'mixed', labels: ['0', '10', '1'], orientations: ['up'], rotations: true, weight: { type: 'variable', name: 'q' } }, { labels: ['0', '10', '1'], orientations: ['down'], rotations: true }],
+      pieces: [...base, { name: 'mixed', edges: { horizontal: '1', rising: '0', falling: '10' }, orientations: ['up'], rotations: true, weight: { type: 'variable', name: 'q' } }, { edges: { horizontal: '0', rising: '10', falling: '1' }, orientations: ['down'], rotations: true }],
     });
     expect(set.pieces.filter((p) => p.name === 'mixed')).toHaveLength(3);
     expect(set.pieces.find((p) => p.name === 'mixed')!.weight).toEqual({ type: 'variable', name: 'q' });
@@ -45,16 +45,16 @@ describe('custom piece sets', () => {
   });
 
   it('rejects duplicate pieces', () => {
-    const e = errorOf({ name: 'dup', boundaryLabels: ['0', '1'], pieces: [...base, { name: 'again', labels: ['0', '0', '0'], orientations: ['up'] }] });
+    const e = errorOf({ name: 'dup', boundaryLabels: ['0', '1'], pieces: [...base, { name: 'again', edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up'] }] });
     expect(e.code).toBe('invalid_piece_set');
-    expect(e.message).toMatch(/^Duplicate piece: expected each up triangle \(0, 0, 0\) once, received it in 'piece-1' and 'again'/);
+    expect(e.message).toMatch(/^Duplicate piece: expected each up triangle \(horizontal 0, rising 0, falling 0\) once, received it in 'piece-1' and 'again'/);
     expect(e.path).toBe('pieces[2]');
   });
 
   it('rejects a label no piece can match', () => {
-    const e = errorOf({ name: 'lonely', boundaryLabels: ['0', '1'], pieces: [...base, { name: 'odd', labels: ['0', 'x', '1'], orientations: ['up'] }] });
-    expect(e.message).toMatch(/^Unmatched label: expected some down piece with 'x' on its up-left edge, received none/);
-    expect(e.path).toBe('pieces[2].labels');
+    const e = errorOf({ name: 'lonely', boundaryLabels: ['0', '1'], pieces: [...base, { name: 'odd', edges: { horizontal: '1', rising: '0', falling: 'x' }, orientations: ['up'] }] });
+    expect(e.message).toMatch(/^Unmatched label: expected some down piece with 'x' on its falling edge, received none/);
+    expect(e.path).toBe('pieces[2].edges.falling');
   });
 
   it('rejects multi-character or repeated boundary labels', () => {

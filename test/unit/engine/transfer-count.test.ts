@@ -97,7 +97,7 @@ describe('countCompletions', () => {
 
 describe('exactness', () => {
   it('never overflows: 64 triangles of weight 2 give 2^64 [common practice, no source]', () => {
-    const set = buildPieceSet({ name: 'doubling', boundaryLabels: ['0'], pieces: [{ labels: ['0', '0', '0'], orientations: ['up', 'down'], weight: { type: 'integer', value: 2 } }] });
+    const set = buildPieceSet({ name: 'doubling', boundaryLabels: ['0'], pieces: [{ edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up', 'down'], weight: { type: 'integer', value: 2 } }] });
     const v = countBoundary(triangleRegion(8), ['00000000', '', '00000000', '', '00000000', ''], set, { semiring: integerSemiring });
     expect(v).toBe(2n ** 64n);
     expect(countBoundary(triangleRegion(8), ['00000000', '', '00000000', '', '00000000', ''], set, { semiring: fillingCountSemiring })).toBe(1);
