@@ -10,6 +10,9 @@ export type ErrorCode =
   | 'claim_not_found'
   | 'store_error'
   | 'worker_crashed'
+  | 'fingerprint_mismatch'
+  | 'shard_mismatch'
+  | 'merge_conflict'
   | 'interrupted';
 
 /** A coded error: `message` reads `<What>: expected X, received Y`; `path` is a JSON path or argument name. */
@@ -55,6 +58,9 @@ const INPUT_ERRORS: ReadonlySet<ErrorCode> = new Set([
   'invalid_json',
   'file_not_found',
   'claim_not_found',
+  'fingerprint_mismatch',
+  'shard_mismatch',
+  'merge_conflict',
 ]);
 
 /** Documented exit statuses: 2 bad input, 3 internal error, 130 interrupted. */

@@ -2,6 +2,7 @@ import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 import { AppError } from '../errors.js';
 import { DEFAULT_STORE_PATH } from '../store/index.js';
+import { parseShard, type ShardSpec } from './shard-partition.js';
 
 const maxEntry = z
   .string()
@@ -23,9 +24,11 @@ export const RunOptions = z.object({
   json: z.boolean().default(false),
   /** Instances per chunk: the unit of work, resume and lease. */
   chunkSize: z.number().int().min(1).max(1_000_000).default(500),
+  /** `--shard i/N`: sweep only shard i of a deterministic N-way partition of the work (see shard-partition.ts). */
+  shard: z.string().optional(),
 });
 
-export type RunOptions = z.output<typeof RunOptions>;
+export type RunOptions = Omit<z.output<typeof RunOptions>, 'shard'> & { readonly shard?: ShardSpec | undefined };
 export type RunOptionsInput = z.input<typeof RunOptions>;
 
 const kebab = (s: string) => s.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
@@ -33,7 +36,10 @@ const kebab = (s: string) => s.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
 /** Validates run options; the error names the flag, e.g. `→ at --max-counterexamples`. */
 export function parseRunOptions(input: RunOptionsInput): RunOptions {
   const parsed = RunOptions.safeParse(input);
-  if (parsed.success) return parsed.data;
+  if (parsed.success) {
+    const { shard, ...rest } = parsed.data;
+    return shard === undefined ? rest : { ...rest, shard: parseShard(shard) };
+  }
   const issue = parsed.error.issues[0]!;
   const flag = `--${kebab(String(issue.path[0] ?? 'options'))}`;
   let received: unknown = input;

@@ -5,6 +5,9 @@ import { sweepClaim, type SweepProgress } from './sweep-claim.js';
 import type { ClaimSummary, SweepSummary } from './sweep-summary.js';
 import { WorkerPool } from './worker-pool.js';
 
+/** Exit status of `run --shard` when the shard stopped before its work was done (run it again to resume). */
+export const UNFINISHED_SHARD_EXIT = 4;
+
 /** One `run` invocation: claims already loaded by the claims layer, options already validated. */
 export interface SweepInput {
   readonly claims: readonly SweepClaim[];
@@ -48,6 +51,8 @@ export async function runSweep(input: SweepInput): Promise<SweepSummary> {
     db.close();
   }
   const interrupted = claims.some((c) => c.status === 'interrupted') || (input.signal?.aborted ?? false);
-  const exitCode = interrupted ? 130 : claims.some((c) => c.counterexamples > 0) ? 1 : 0;
+  // A shard that stopped before its work was done (e.g. --time-limit) must not look like a finished one to a job scheduler.
+  const unfinishedShard = options.shard !== undefined && claims.some((c) => c.stopReason !== 'finished');
+  const exitCode = interrupted ? 130 : unfinishedShard ? UNFINISHED_SHARD_EXIT : claims.some((c) => c.counterexamples > 0) ? 1 : 0;
   return { db: options.db, claims, interrupted, elapsedMs: Date.now() - began, workerCrashes, exitCode };
 }

@@ -22,6 +22,7 @@ import { buildClaimSummary, type RunTally } from './build-claim-summary.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 import { recheckCounterexamples } from './recheck-counterexamples.js';
 import type { RunOptions } from './run-options.js';
+import { shardPlan } from './shard-plan.js';
 import { deserializeError } from './serialize-error.js';
 import type { ClaimSummary } from './sweep-summary.js';
 import type { WorkerPool } from './worker-pool.js';
@@ -52,6 +53,9 @@ export interface SweepContext {
 interface ClassState {
   readonly cls: SizeClass;
   readonly count: bigint;
+  /** Work of this run in the class: [first, limit) (the whole class unless --shard narrows it). */
+  readonly first: bigint;
+  readonly limit: bigint;
   cursor: bigint;
   exhausted: boolean;
   outstanding: number;
@@ -67,14 +71,17 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   const method: SweepMethod = options.exact ? 'exact' : 'modular';
   saveClaim(db, { fingerprint: claim.fingerprint, claimId: claim.id, canonicalJson: claim.canonicalJson, engineVersion: claim.engineVersion, sourceFile: claim.file });
   reapDeadRuns(db);
-  const runId = startRun(db, claim.fingerprint, { ...options, file: claim.file ?? null });
+  const sharded = shardPlan(plan, options);
+  const runId = startRun(db, claim.fingerprint, { ...options, file: claim.file ?? null, ...(sharded ? { shard: sharded.record } : {}) });
   const heartbeat = setInterval(() => touchRun(db, runId), 5_000);
   heartbeat.unref();
   const base = { runtimeModule: ctx.runtimeModule, canonicalJson: claim.canonicalJson, fingerprint: claim.fingerprint, exact: options.exact, max: options.max };
-  const states: ClassState[] = plan.classes(options.max).map((cls) => ({
+  const states: ClassState[] = (sharded?.classes ?? plan.classes(options.max).map((cls) => ({ cls, first: 0n, limit: plan.instanceCount(cls) }))).map(({ cls, first, limit }) => ({
     cls,
     count: plan.instanceCount(cls),
-    cursor: 0n,
+    first,
+    limit,
+    cursor: first,
     exhausted: false,
     outstanding: 0,
     checked: 0,
@@ -91,7 +98,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
     let known = standing.length;
     let firstFail = states.findIndex((s) => failing.has(s.cls.key));
     if (firstFail < 0) firstFail = Infinity;
-    const total = states.reduce((acc, s) => acc + Number(s.count - doneInstances(db, claim.fingerprint, s.cls.key, method)), 0);
+    const total = states.reduce((acc, s) => acc + Math.max(0, Number(s.limit - s.first - doneInstances(db, claim.fingerprint, s.cls.key, method))), 0);
     const progress = () => ctx.onProgress?.({ claimId: claim.id, checked: tally.checked, total, counterexamples: known });
     progress();
 
@@ -103,10 +110,12 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
         markVerified(db, claim.fingerprint, runId, { classKey: s.cls.key, method: cov.method, size: s.cls.size, lengths: s.cls.lengths, variables: s.cls.variables, instances: s.count, errorBound: cov.errorBound });
       }
     };
+    let longestChunkMs = 0;
     const checkStops = () => {
       if (stop || fatal) return;
       if (ctx.signal?.aborted) stop = 'signal';
-      else if (ctx.deadline !== undefined && Date.now() >= ctx.deadline) stop = 'time_limit';
+      // Stop early enough that the chunks still running are likely to end before the deadline.
+      else if (ctx.deadline !== undefined && Date.now() + longestChunkMs >= ctx.deadline) stop = 'time_limit';
       else if (options.maxCounterexamples !== undefined && known >= options.maxCounterexamples) stop = 'max_counterexamples';
     };
 
@@ -118,7 +127,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
           return undefined;
         }
         const s = states[ci]!;
-        const lease = leaseChunk(db, { fingerprint: claim.fingerprint, classKey: s.cls.key, method, runId, from: s.cursor, count: s.count, size: BigInt(options.chunkSize) });
+        const lease = leaseChunk(db, { fingerprint: claim.fingerprint, classKey: s.cls.key, method, runId, from: s.cursor, count: s.limit, size: BigInt(options.chunkSize) });
         if (lease) {
           s.cursor = lease.end;
           return { s, lease };
@@ -133,8 +142,10 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
     const dispatch = async (s: ClassState, lease: LeasedChunk): Promise<void> => {
       const task: ChunkTask = { ...base, kind: 'chunk', classKey: s.cls.key, start: lease.start, end: lease.end, attempt: 0 };
       const what = `chunk ${s.cls.key}:${lease.start}-${lease.end}`;
+      const startedAt = Date.now();
       try {
         const reply = await ctx.pool.run(task, what);
+        longestChunkMs = Math.max(longestChunkMs, Date.now() - startedAt);
         if (!reply.ok) throw deserializeError(reply.error, what);
         if (!('chunk' in reply)) throw new Error(`${what}: reply without results`);
         const r = reply.chunk;

@@ -66,8 +66,8 @@ export interface SweepSummary {
   readonly elapsedMs: number;
   /** Worker threads that died mid-task (each task retried, up to the bound). */
   readonly workerCrashes: number;
-  /** 0 holds on everything swept, 1 a counterexample is known, 130 interrupted. */
-  readonly exitCode: 0 | 1 | 130;
+  /** 0 holds on everything swept, 1 a counterexample is known, 4 a --shard run stopped unfinished, 130 interrupted. */
+  readonly exitCode: 0 | 1 | 4 | 130;
 }
 
 const shellQuote = (s: string) => (/^[\w./=:,+-]+$/.test(s) ? s : `'${s.replace(/'/g, `'\\''`)}'`);

@@ -7,3 +7,4 @@ export * from './chunk-completion.js';
 export * from './counterexample-records.js';
 export * from './verified-class-records.js';
 export * from './permutation-records.js';
+export * from './shard-records.js';

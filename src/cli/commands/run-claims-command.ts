@@ -18,6 +18,7 @@ interface RunArgs {
   exact: boolean;
   json: boolean;
   'chunk-size'?: number;
+  shard?: string;
 }
 
 /** Ctrl-C / SIGTERM abort the sweep once (finished chunks are kept); a second one exits at once. */
@@ -52,7 +53,8 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
       .option('time-limit', { type: 'number', describe: 'stop handing out work after this many seconds' })
       .option('exact', { type: 'boolean', default: false, describe: 'exact polynomials instead of modular identity tests' })
       .option('json', { type: 'boolean', default: false, describe: 'print the summary as one JSON object, no progress bar' })
-      .option('chunk-size', { type: 'number', describe: 'instances per chunk (the unit of resume; default 500)' }) as never,
+      .option('chunk-size', { type: 'number', describe: 'instances per chunk (the unit of resume; default 500)' })
+      .option('shard', { type: 'string', describe: "sweep only shard i of N (e.g. 0/4), balanced by estimated work; use one --db per shard; exit 4 if unfinished" }) as never,
   handler: (args) =>
     runCommand(args.json, async () => {
       const options = parseRunOptions({
@@ -65,6 +67,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
         exact: args.exact,
         json: args.json,
         ...(args['chunk-size'] !== undefined ? { chunkSize: args['chunk-size'] } : {}),
+        ...(args.shard !== undefined ? { shard: args.shard } : {}),
       });
       // Every claim is validated before the store is opened, so bad input never touches it.
       const claims = args.claims.map((file) => loadSweepClaim(file));
