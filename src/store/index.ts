@@ -8,3 +8,4 @@ export * from './counterexample-records.js';
 export * from './verified-class-records.js';
 export * from './permutation-records.js';
 export * from './shard-records.js';
+export * from './discover-evidence-records.js';

@@ -101,4 +101,17 @@ export const STORE_MIGRATIONS: readonly string[] = [
   ALTER TABLE chunks ADD COLUMN common_permutations TEXT;
   ALTER TABLE chunks ADD COLUMN permutations_truncated INTEGER NOT NULL DEFAULT 0;
   `,
+  // 3: discover's evidence per candidate claim and class: instances compared, how many had a nonzero value,
+  // and (polynomial theories) the permutations that served the whole class.
+  `
+  CREATE TABLE discover_evidence (
+    fingerprint         TEXT NOT NULL REFERENCES claims (fingerprint),
+    class_key           TEXT NOT NULL,
+    instances           INTEGER NOT NULL,
+    nonzero             INTEGER NOT NULL,
+    common_permutations TEXT,
+    run_id              INTEGER NOT NULL REFERENCES runs (run_id),
+    PRIMARY KEY (fingerprint, class_key)
+  );
+  `,
 ];
