@@ -11,6 +11,7 @@ import { replayCommand } from './commands/replay-command.js';
 import { schemaCommand } from './commands/schema-command.js';
 import { demoCommand } from './commands/demo-command.js';
 import { reportCommand } from './commands/report-command.js';
+import { discoverCommand } from './commands/discover-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
@@ -24,6 +25,7 @@ await yargs(hideBin(process.argv))
   .command(demoCommand)
   .command(crosscheckCommand)
   .command(reportCommand)
+  .command(discoverCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()
   .fail((msg, err) => {
