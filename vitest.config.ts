@@ -12,6 +12,8 @@ export default defineConfig({
         test: {
           name: 'integration',
           include: ['test/integration/**/*.test.ts', 'test/e2e/**/*.test.ts'],
+          // Workers and the spawned CLI run dist/: refuse to start when it is older than src/.
+          globalSetup: ['test/setup/dist-is-fresh.ts'],
           testTimeout: 300_000,
           hookTimeout: 300_000,
         },

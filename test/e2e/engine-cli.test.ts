@@ -1,15 +1,12 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 const cli = (args: string[]) => spawnSync(process.execPath, ['dist/cli/main.js', ...args], { encoding: 'utf8' });
 
-beforeAll(() => {
-  execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { stdio: 'inherit' });
-});
-
+// dist/ is built once by the npm script before any test; test/setup/dist-is-fresh.ts checks it is current.
 describe('puzzlesweep count', () => {
   it('prints the stable JSON fields', () => {
     const r = cli(['count', '--theory', 'equivariant', '--triangle', '10,10,10', '--json']);
