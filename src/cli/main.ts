@@ -12,6 +12,7 @@ import { schemaCommand } from './commands/schema-command.js';
 import { demoCommand } from './commands/demo-command.js';
 import { reportCommand } from './commands/report-command.js';
 import { discoverCommand } from './commands/discover-command.js';
+import { mergeCommand } from './commands/merge-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
@@ -26,6 +27,7 @@ await yargs(hideBin(process.argv))
   .command(crosscheckCommand)
   .command(reportCommand)
   .command(discoverCommand)
+  .command(mergeCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()
   .fail((msg, err) => {

@@ -9,3 +9,4 @@ export * from './verified-class-records.js';
 export * from './permutation-records.js';
 export * from './shard-records.js';
 export * from './discover-evidence-records.js';
+export * from './merge-stores.js';
