@@ -32,10 +32,21 @@ function tiling(db: string): Record<string, string> {
   return out;
 }
 
+// One uninterrupted single-process sweep with ARGS: the store the killed, resumed and shared runs must end
+// with. Built on first use, once for the whole file.
+let referenceDb: string | undefined;
+function referenceStore(): string {
+  if (referenceDb === undefined) {
+    const db = join(dir, 'reference.sqlite');
+    expect(cli(['run', ...ARGS, '--db', db]).status).toBe(1);
+    referenceDb = db;
+  }
+  return referenceDb;
+}
+
 describe('kill -9 and worker crashes (built CLI, real store files)', () => {
   it('a sweep killed with SIGKILL resumes to the same store as an uninterrupted one', async () => {
-    const reference = join(dir, 'reference.sqlite');
-    expect(cli(['run', ...ARGS, '--db', reference]).status).toBe(1);
+    const reference = referenceStore();
 
     const killed = join(dir, 'killed.sqlite');
     const child = cliAsync(['run', ...ARGS, '--db', killed]);
@@ -103,8 +114,7 @@ describe('kill -9 and worker crashes (built CLI, real store files)', () => {
   });
 
   it('two processes sweeping one store at once end with the store of one process, nothing counted twice', async () => {
-    const reference = join(dir, 'single.sqlite');
-    expect(cli(['run', ...ARGS, '--db', reference]).status).toBe(1);
+    const reference = referenceStore();
     const shared = join(dir, 'shared.sqlite');
     const one = cliAsync(['run', ...ARGS, '--workers', '1', '--db', shared]);
     const two = cliAsync(['run', ...ARGS, '--workers', '1', '--db', shared]);
