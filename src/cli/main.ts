@@ -13,6 +13,7 @@ import { demoCommand } from './commands/demo-command.js';
 import { reportCommand } from './commands/report-command.js';
 import { discoverCommand } from './commands/discover-command.js';
 import { mergeCommand } from './commands/merge-command.js';
+import { clusterScriptCommand } from './commands/cluster-script-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
@@ -28,6 +29,7 @@ await yargs(hideBin(process.argv))
   .command(reportCommand)
   .command(discoverCommand)
   .command(mergeCommand)
+  .command(clusterScriptCommand)
   .demandCommand(1, 'Command: expected one of the commands listed above, received none')
   .strict()
   .fail((msg, err) => {

@@ -31,7 +31,7 @@ function mergeText(r: MergeReport, into: string): string {
   const verdict = r.complete
     ? 'complete: every shard present and finished'
     : `incomplete: shards ${[...new Set(open)].sort((a, b) => a - b).join(', ')} missing or unfinished; run them (they resume), then merge again`;
-  return [`merged ${r.sources.length} store(s) into ${into}`, ...r.claims.flatMap(claimText), ...r.otherTables.map((t) => `table ${t.table}: ${t.added} rows added, ${t.duplicates} duplicates`), `result: ${verdict}`].join('\n');
+  return [`merged ${r.sources.length} store(s) into ${into}`, ...r.claims.flatMap(claimText), ...r.otherTables.filter((t) => t.added + t.duplicates > 0).map((t) => `table ${t.table}: ${t.added} rows added, ${t.duplicates} duplicates`), `result: ${verdict}`].join('\n');
 }
 
 export const mergeCommand: CommandModule<object, MergeArgs> = {
