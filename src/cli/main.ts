@@ -14,10 +14,14 @@ import { reportCommand } from './commands/report-command.js';
 import { discoverCommand } from './commands/discover-command.js';
 import { mergeCommand } from './commands/merge-command.js';
 import { clusterScriptCommand } from './commands/cluster-script-command.js';
+import { expandCommand } from './commands/expand-command.js';
+import { tableCommand } from './commands/table-command.js';
 
 await yargs(hideBin(process.argv))
   .scriptName('puzzlesweep')
   .command(countCommand)
+  .command(expandCommand)
+  .command(tableCommand)
   .command(showCommand)
   .command(runClaimsCommand)
   .command(statusCommand)

@@ -12,25 +12,26 @@ describe('puzzlesweep count', () => {
     const r = cli(['count', '--theory', 'equivariant', '--triangle', '10,10,10', '--json']);
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout);
-    expect(out).toMatchObject({ theory: 'equivariant', lengths: [2, 0, 2, 0, 2, 0], sides: ['10', '', '10', '', '01', ''], puzzles: '1' });
+    expect(out).toMatchObject({ theory: 'equivariant', lengths: [2, 0, 2, 0, 2, 0], sides: ['10', '', '10', '', '01', ''], puzzles: 1, formatVersion: 2 });
+    // Integers are JSON numbers below 2^53 [README, "Counting one boundary"].
     // c_{10,10}^{10} = y2 − y1 on Gr(1,2) [localization; Knutson–Tao, Duke 2003]
     expect(out.value.terms).toHaveLength(2);
     expect(out.value.terms).toEqual(
       expect.arrayContaining([
-        { coefficient: '1', exponents: [0, 1] },
-        { coefficient: '-1', exponents: [1, 0] },
+        { coefficient: 1, exponents: [0, 1] },
+        { coefficient: -1, exponents: [1, 0] },
       ]),
     );
   });
 
   it('counts c_{21,21}^{321} = 2 given as sides [value from memory]', () => {
     const r = cli(['count', '--theory', 'cohomology', '--sides', '010101,-,010101,-,010101,-', '--json']);
-    expect(JSON.parse(r.stdout).value).toBe('2');
+    expect(JSON.parse(r.stdout).value).toBe(2);
   });
 
   it('counts puzzles by a statistic: G1·G1 ∋ −G21 comes from one puzzle with one K-piece [Buch, Acta Math. 2002]', () => {
     const r = cli(['count', '--theory', 'k-theory', '--triangle', '0101,0101,1010', '--statistic', 'k-piece', '--json']);
-    expect(JSON.parse(r.stdout)).toMatchObject({ value: '-1', distribution: { kind: 'k-piece', counts: ['0', '1'] } });
+    expect(JSON.parse(r.stdout)).toMatchObject({ value: -1, distribution: { kind: 'k-piece', counts: [0, 1] } });
     const bad = cli(['count', '--theory', 'k-theory', '--triangle', '0101,0101,1010', '--statistic', 'k']);
     expect(bad.status).toBe(2);
     expect(bad.stderr).toContain("one of '0-triangle' | '1-triangle' | '10-triangle' | 'k-piece', received 'k'");
@@ -57,7 +58,7 @@ describe('puzzlesweep count', () => {
   it('reads a custom piece set and names the bad field of a broken one', () => {
     const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-'));
     const file = join(dir, 'broken.json');
-    writeFileSync(file, JSON.stringify({ name: 'broken', boundaryLabels: ['0', '1'], pieces: [{ labels: ['0', '0', '0'], orientations: ['sideways'] }] }));
+    writeFileSync(file, JSON.stringify({ name: 'broken', boundaryLabels: ['0', '1'], pieces: [{ edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['sideways'] }] }));
     const r = cli(['count', '--theory', file, '--triangle', '01,01,01']);
     expect(r.status).toBe(2);
     expect(r.stderr).toContain('[invalid_piece_set]');
@@ -77,7 +78,7 @@ describe('puzzlesweep show and crosscheck', () => {
     const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-'));
     const file = join(dir, 'no-rhombi.json');
     // without the 10-triangles only trivial products survive, so σ1·σ1 = σ2 + σ11 is missed [Pieri’s rule; Fulton 1997]
-    writeFileSync(file, JSON.stringify({ name: 'no-rhombi', boundaryLabels: ['0', '1'], pieces: [{ labels: ['0', '0', '0'], orientations: ['up', 'down'] }, { labels: ['1', '1', '1'], orientations: ['up', 'down'] }] }));
+    writeFileSync(file, JSON.stringify({ name: 'no-rhombi', boundaryLabels: ['0', '1'], pieces: [{ edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up', 'down'] }, { edges: { horizontal: '1', rising: '1', falling: '1' }, orientations: ['up', 'down'] }] }));
     const r = cli(['crosscheck', '--theory', 'cohomology', '--max-n', '4', '--pieces', file]);
     expect(r.status).toBe(1);
     expect(r.stdout).toContain('first disagreement');

@@ -3,13 +3,18 @@ import { resolveTheory } from '../../claims/resolve-theory.js';
 import { generatingSemiring } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
 import { countRegion } from '../../claims/count-region.js';
-import { parseBoundaryArgs } from '../boundary-args.js';
+import { parseBoundary, triangleEchoJson, triangleEchoLines } from '../boundary-args.js';
+import { classOptions, formOption } from '../class-options.js';
+import type { ValueForm } from '../../report/root-form.js';
 import { runCommand } from '../run-command.js';
 
 interface CountArgs {
   theory: string;
   triangle?: string;
+  partitions?: string;
+  grassmannian?: string;
   sides?: string;
+  form: ValueForm;
   completed: boolean;
   statistic?: string;
   json: boolean;
@@ -19,9 +24,8 @@ export const countCommand: CommandModule<object, CountArgs> = {
   command: 'count',
   describe: 'Print the value of one boundary (the sum over its puzzles of the product of piece weights)',
   builder: (y) =>
-    y
+    formOption(classOptions(y, 'λ,μ,ν'))
       .option('theory', { type: 'string', demandOption: true, describe: "cohomology | equivariant | k-theory | dual-k-theory | path to a piece-set JSON" })
-      .option('triangle', { type: 'string', describe: 'λ,μ,ν on the upright triangle: λ up the NW side, μ down the NE side, ν along the bottom' })
       .option('sides', { type: 'string', describe: "six clockwise side strings s1,…,s6; an empty side is '' or '-'" })
       .option('completed', { type: 'boolean', default: false, describe: 'count the completed triangle instead of the region itself' })
       .option('statistic', { type: 'string', describe: 'also count puzzles by their number of pieces of this kind (e.g. k-piece, equivariant)' })
@@ -29,19 +33,21 @@ export const countCommand: CommandModule<object, CountArgs> = {
   handler: (args) =>
     runCommand(args.json, () => {
       const pieces = resolveTheory(args.theory);
-      const result = countRegion(pieces, parseBoundaryArgs(args), { completed: args.completed, ...(args.statistic !== undefined ? { statistic: args.statistic } : {}) });
+      const { sides, triangle } = parseBoundary(args);
+      const result = countRegion(pieces, sides, { completed: args.completed, ...(args.statistic !== undefined ? { statistic: args.statistic } : {}) });
       if (args.json) {
-        process.stdout.write(`${JSON.stringify(countJson(result))}\n`);
+        process.stdout.write(`${JSON.stringify(countJson(result, args.form, triangle ? triangleEchoJson(triangle) : {}))}\n`);
         return;
       }
       const counted = result.completion ?? result;
       const lines = [
         `theory:  ${result.theory}`,
         `region:  ${result.region.lengths.join(',')} (completed triangle N = ${result.region.size})`,
-        `sides:   ${result.sides.map((s) => s || '-').join(' | ')}`,
+        // A triangle is echoed as typed (ν left to right), never as the clockwise bottom string.
+        ...(triangle ? triangleEchoLines(triangle) : [`sides:   ${result.sides.map((s) => s || '-').join(' | ')}`]),
         ...(result.completion ? [`counted: completed triangle, sides ${counted.sides.map((s) => s || '-').join(' | ')}`] : []),
         `puzzles: ${result.puzzles}`,
-        `value:   ${valueText(result.value)}`,
+        `value:   ${valueText(result.value, args.form)}`,
         ...(result.distribution ? [`puzzles by number of ${result.distribution.kind} pieces: ${generatingSemiring.toText(result.distribution.counts)}`] : []),
       ];
       process.stdout.write(`${lines.join('\n')}\n`);

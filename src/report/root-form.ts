@@ -1,0 +1,121 @@
+import { addPoly, constantPoly, mulPoly, polyTerms, polyText, variablePoly, type Polynomial } from '../engine/index.js';
+
+/** How an equivariant value is written: in the roots z_m = y_{m+1} − y_m, expanded in y, or with its root factors pulled out. */
+export const VALUE_FORMS = ['roots', 'expanded', 'factored'] as const;
+export type ValueForm = (typeof VALUE_FORMS)[number];
+
+// In the root basis variable 0 is y_1 and variable m (1 ≤ m < N) is z_m; named variables keep their index.
+/** Rewrites a polynomial in y_1..y_N via y_m = y_1 + z_1 + … + z_{m−1}. */
+export function toRootBasis(p: Polynomial, size: number): Polynomial {
+  const power = new Map<string, Polynomial>();
+  const ym = (m: number): Polynomial => {
+    let s = variablePoly(0);
+    for (let l = 1; l < m; l++) s = addPoly(s, variablePoly(l));
+    return s;
+  };
+  const pow = (m: number, e: number): Polynomial => {
+    const key = `${m}^${e}`;
+    let v = power.get(key);
+    if (!v) {
+      v = e === 0 ? constantPoly(1n) : mulPoly(pow(m, e - 1), ym(m));
+      power.set(key, v);
+    }
+    return v;
+  };
+  let out: Polynomial = new Map();
+  for (const t of polyTerms(p, 0)) {
+    let term: Polynomial = constantPoly(t.coefficient);
+    t.exponents.forEach((e, k) => {
+      if (e === 0) return;
+      term = mulPoly(term, k < size ? pow(k + 1, e) : mulPowVar(k, e));
+    });
+    out = addPoly(out, term);
+  }
+  return out;
+}
+
+function mulPowVar(k: number, e: number): Polynomial {
+  let v = constantPoly(1n);
+  for (let i = 0; i < e; i++) v = mulPoly(v, variablePoly(k));
+  return v;
+}
+
+/** True when every coefficient in the root basis is ≥ 0 and y_1 does not occur (Graham positivity). */
+export function isRootPositive(p: Polynomial, size: number): boolean {
+  const r = toRootBasis(p, size);
+  return polyTerms(r, 0).every((t) => t.coefficient > 0n && (t.exponents[0] ?? 0) === 0);
+}
+
+/** Name of variable k in the root basis. */
+export function rootVariableName(k: number, size: number, names: readonly string[]): string {
+  if (k === 0) return 'y1';
+  return k < size ? `z${k}` : (names[k - size] ?? `v${k}`);
+}
+
+// f = (y_j − y_i)·q + f|_{y_j = y_i}; q collects (y_j^e − y_i^e)/(y_j − y_i) = Σ_{a+b=e−1} y_j^a y_i^b.
+function divideByRoot(f: Polynomial, i: number, j: number): Polynomial | undefined {
+  let rest: Polynomial = new Map();
+  let q: Polynomial = new Map();
+  for (const t of polyTerms(f, 0)) {
+    const e = [...t.exponents];
+    const ej = e[j] ?? 0;
+    const restE = [...e];
+    while (restE.length <= Math.max(i, j)) restE.push(0);
+    restE[i] = (restE[i] ?? 0) + ej;
+    restE[j] = 0;
+    rest = addPoly(rest, monomial(t.coefficient, restE));
+    for (let a = 0; a < ej; a++) {
+      const qe = [...restE];
+      qe[i] = (e[i] ?? 0) + (ej - 1 - a);
+      qe[j] = a;
+      q = addPoly(q, monomial(t.coefficient, qe));
+    }
+  }
+  return rest.size === 0 ? q : undefined;
+}
+
+function monomial(c: bigint, exponents: readonly number[]): Polynomial {
+  let m = constantPoly(c);
+  exponents.forEach((e, k) => {
+    for (let i = 0; i < e; i++) m = mulPoly(m, variablePoly(k));
+  });
+  return m;
+}
+
+/** The factors y_j − y_i (i < j, with multiplicity) that divide p, and the cofactor left. */
+export function rootFactors(p: Polynomial, size: number): { factors: [number, number][]; cofactor: Polynomial } {
+  const factors: [number, number][] = [];
+  let cofactor = p;
+  if (cofactor.size === 0) return { factors, cofactor };
+  for (let i = 0; i < size; i++) {
+    for (let j = i + 1; j < size; j++) {
+      for (;;) {
+        const q = divideByRoot(cofactor, i, j);
+        if (!q) break;
+        factors.push([i + 1, j + 1]);
+        cofactor = q;
+      }
+    }
+  }
+  return { factors, cofactor };
+}
+
+/** The value's text in a form; `roots` falls back to `expanded` when the value is not positive in the roots. */
+export function formText(p: Polynomial, size: number, names: readonly string[], form: ValueForm): { form: ValueForm; text: string } {
+  const yName = (k: number) => (k < size ? `y${k + 1}` : (names[k - size] ?? `v${k}`));
+  if (form === 'expanded' || p.size === 0) return { form: 'expanded', text: polyText(p, yName) };
+  if (form === 'roots') {
+    if (!isRootPositive(p, size)) return { form: 'expanded', text: polyText(p, yName) };
+    return { form, text: polyText(toRootBasis(p, size), (k) => rootVariableName(k, size, names)) };
+  }
+  const { factors, cofactor } = rootFactors(p, size);
+  const parts = factors.map(([i, j]) => `(y${j} - y${i})`);
+  const c = polyTerms(cofactor, 0);
+  const constant = c.length === 1 && c[0]!.exponents.every((e) => e === 0) ? c[0]!.coefficient : undefined;
+  const rest = isRootPositive(cofactor, size) ? polyText(toRootBasis(cofactor, size), (k) => rootVariableName(k, size, names)) : polyText(cofactor, yName);
+  if (constant === 1n && parts.length) return { form, text: parts.join('*') };
+  if (constant === -1n && parts.length) return { form, text: `-${parts.join('*')}` };
+  const cof = c.length > 1 && parts.length ? `(${rest})` : rest;
+  return { form, text: [...(constant !== undefined && parts.length ? [String(constant)] : [cof]), ...parts].join('*') };
+}
+
