@@ -1,7 +1,7 @@
 import { AppError } from '../errors.js';
 import type { Store } from './open-store.js';
 import type { CoverMap } from './range-cover.js';
-import { latestShardRecords, type ShardRecord } from './shard-records.js';
+import { allShardRecords, type ShardRecord } from './shard-records.js';
 import { STORE_MIGRATIONS } from './store-migrations.js';
 
 /** A store offered to a merge, named for messages (its path). */
@@ -59,11 +59,11 @@ export function checkFingerprints(sources: readonly MergeSource[]): void {
   }
 }
 
-/** Shard records per fingerprint; shards of one claim must agree on the shard count and the partitioned plan. */
-export function collectShards(sources: readonly MergeSource[]): Map<string, { store: string; record: ShardRecord }[]> {
+/** Shard records per fingerprint (from the target too); shards of one claim must agree on the shard count and the partitioned plan. */
+export function collectShards(stores: readonly MergeSource[]): Map<string, { store: string; record: ShardRecord }[]> {
   const out = new Map<string, { store: string; record: ShardRecord }[]>();
-  for (const s of sources) {
-    for (const [fp, record] of latestShardRecords(s.db)) out.set(fp, [...(out.get(fp) ?? []), { store: s.name, record }]);
+  for (const s of stores) {
+    for (const { fingerprint, record } of allShardRecords(s.db)) out.set(fingerprint, [...(out.get(fingerprint) ?? []), { store: s.name, record }]);
   }
   for (const [fp, list] of out) {
     const first = list[0]!;
@@ -79,26 +79,31 @@ export function collectShards(sources: readonly MergeSource[]): Map<string, { st
   return out;
 }
 
-/** Which shards are present, missing, unfinished (their own store does not cover their ranges) or repeated. */
-export function shardReport(list: readonly { store: string; record: ShardRecord }[], covers: ReadonlyMap<string, CoverMap>, fingerprint: string): ShardReport {
+/**
+ * Which shards are present, missing, or unfinished: work of their ranges that no finished chunk of the merged
+ * store covers (so a shard finished in another store counts as finished). `repeated`: indices in more than
+ * one of the merged stores.
+ */
+export function shardReport(list: readonly { store: string; record: ShardRecord }[], merged: CoverMap, fingerprint: string, sourceNames: ReadonlySet<string>): ShardReport {
   const count = list[0]!.record.count;
   const seen = new Map<number, string[]>();
-  const unfinished: { index: number; store: string; remaining: string }[] = [];
+  const unfinished = new Map<number, { index: number; store: string; remaining: string }>();
   for (const { store, record } of list) {
-    seen.set(record.index, [...(seen.get(record.index) ?? []), store]);
+    const stores = seen.get(record.index) ?? [];
+    if (!stores.includes(store)) stores.push(store);
+    seen.set(record.index, stores);
     let remaining = 0n;
     for (const c of record.classes) {
       const start = BigInt(c.start);
       const end = BigInt(c.end);
-      remaining += end - start - (covers.get(store)?.get(fingerprint, c.key)?.coveredWithin(start, end) ?? 0n);
+      remaining += end - start - (merged.get(fingerprint, c.key)?.coveredWithin(start, end) ?? 0n);
     }
-    if (remaining > 0n) unfinished.push({ index: record.index, store, remaining: remaining.toString() });
+    if (remaining > 0n) unfinished.set(record.index, { index: record.index, store, remaining: remaining.toString() });
   }
-  // A shard rerun into another store may be finished there: only indices with no finished copy count.
-  const finished = new Set(list.filter((x) => !unfinished.some((u) => u.store === x.store && u.index === x.record.index)).map((x) => x.record.index));
-  const open = unfinished.filter((u) => !finished.has(u.index));
   const present = [...seen.keys()].sort((a, b) => a - b);
   const missing = Array.from({ length: count }, (_, i) => i).filter((i) => !seen.has(i));
-  const repeated = [...seen].filter(([, stores]) => stores.length > 1).map(([index, stores]) => ({ index, stores }));
-  return { count, present, missing, unfinished: open.sort((a, b) => a.index - b.index), repeated };
+  const repeated = [...seen]
+    .map(([index, stores]) => ({ index, stores: stores.filter((s) => sourceNames.has(s)) }))
+    .filter((r) => r.stores.length > 1);
+  return { count, present, missing, unfinished: [...unfinished.values()].sort((a, b) => a.index - b.index), repeated };
 }

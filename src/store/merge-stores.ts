@@ -46,16 +46,16 @@ const SPECIAL = new Set(['schema_version', 'claims', 'runs', 'chunks', 'countere
 
 type Claim = { -readonly [K in keyof ClaimMergeReport]: ClaimMergeReport[K] };
 
-/** A run is the same run in two stores when claim, host, pid and start time agree (a store copied or merged twice). */
+/** A run is the same run in two stores when claim, host, pid, start time and options agree (a store copied or merged twice). */
 function copyRuns(target: Store, shape: TableShape, source: MergeSource): Map<string, bigint> {
   const cols = sharedColumns(shape, tableShape(source.db, 'runs')!).filter((c) => c !== 'run_id');
-  const find = target.prepare('SELECT run_id, heartbeat_at FROM runs WHERE fingerprint = ? AND host = ? AND pid = ? AND started_at = ?').safeIntegers(true);
+  const find = target.prepare('SELECT run_id, heartbeat_at FROM runs WHERE fingerprint = ? AND host = ? AND pid = ? AND started_at = ? AND options_json = ?').safeIntegers(true);
   const insert = target.prepare(`INSERT INTO runs (${cols.join(', ')}) VALUES (${cols.map(() => '?').join(', ')})`);
   const update = target.prepare(`UPDATE runs SET ${cols.map((c) => `${c} = ?`).join(', ')} WHERE run_id = ?`);
   const map = new Map<string, bigint>();
   for (const row of source.db.prepare('SELECT * FROM runs ORDER BY run_id').safeIntegers(true).all() as Row[]) {
     const values = cols.map((c) => row[c]);
-    const existing = find.get(row.fingerprint, row.host, row.pid, row.started_at) as { run_id: bigint; heartbeat_at: string } | undefined;
+    const existing = find.get(row.fingerprint, row.host, row.pid, row.started_at, row.options_json) as { run_id: bigint; heartbeat_at: string } | undefined;
     if (existing) {
       // The copy with the newer heartbeat has the later counts and status.
       if (String(row.heartbeat_at) > existing.heartbeat_at) update.run(...values, existing.run_id);
@@ -93,7 +93,7 @@ function readCounterexamples(db: Store): { all: Set<string>; standing: { key: st
 export function mergeStores(target: Store, targetName: string, sources: readonly MergeSource[]): MergeReport {
   checkSchemas(sources);
   checkFingerprints(sources);
-  const shards = collectShards(sources);
+  collectShards([{ name: targetName, db: target }, ...sources]);
   const claims = new Map<string, Claim>();
   const claimOf = (fp: string): Claim => {
     let c = claims.get(fp);
@@ -161,9 +161,19 @@ export function mergeStores(target: Store, targetName: string, sources: readonly
         hint: 'nothing was written; the stores disagree about the same instances. Run the shards involved again into fresh stores, or leave one of the stores out',
       });
     }
-    for (const [fp, list] of shards) {
+    // Shards as the merged store now holds them: the ones merged before and the ones merged now.
+    const merged = new CoverMap();
+    readCoverage(target, merged);
+    const sourceNames = new Set(sources.map((s) => s.name));
+    const held = collectShards([{ name: targetName, db: target }]);
+    const now = collectShards(sources);
+    for (const [fp, list] of held) {
+      if (!claims.has(fp)) continue; // a claim of the target that this merge does not touch
       const c = claimOf(fp);
-      c.shards = shardReport(list, covers, fp);
+      // Name the stores of this merge where they hold the shard, the target otherwise.
+      const named = list.map((x) => now.get(fp)?.filter((y) => y.record.index === x.record.index) ?? []).flat();
+      const byIndex = new Set(named.map((x) => x.record.index));
+      c.shards = shardReport([...named, ...list.filter((x) => !byIndex.has(x.record.index))], merged, fp, sourceNames);
       c.newlyVerified = verifyCovered(target, fp, list.flatMap((x) => x.record.classes));
     }
     for (const c of claims.values()) {

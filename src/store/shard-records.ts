@@ -32,3 +32,14 @@ export function latestShardRecords(db: Store): Map<string, ShardRecord> {
   }
   return out;
 }
+
+/** Every shard recorded in a store's runs (a merged store holds many), one per claim and shard index, newest kept. */
+export function allShardRecords(db: Store): { fingerprint: string; record: ShardRecord }[] {
+  const rows = db.prepare('SELECT fingerprint, options_json FROM runs ORDER BY run_id').all() as { fingerprint: string; options_json: string }[];
+  const out = new Map<string, { fingerprint: string; record: ShardRecord }>();
+  for (const r of rows) {
+    const shard = (JSON.parse(r.options_json) as { shard?: ShardRecord }).shard;
+    if (shard && Array.isArray(shard.classes)) out.set(`${r.fingerprint}|${shard.index}`, { fingerprint: r.fingerprint, record: shard });
+  }
+  return [...out.values()];
+}
