@@ -6,7 +6,15 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   test: {
     projects: [
-      { test: { name: 'unit', include: ['test/unit/**/*.test.ts'], testTimeout: 120_000 } },
+      {
+        test: {
+          name: 'unit',
+          include: ['test/unit/**/*.test.ts'],
+          // Refuses child processes, worker threads and SQLite files: those tests belong in integration.
+          setupFiles: ['test/setup/unit-is-pure.ts'],
+          testTimeout: 120_000,
+        },
+      },
       { test: { name: 'math', include: ['test/math/**/*.test.ts'], testTimeout: 600_000 } },
       {
         test: {

@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { naiveCount } from '../../src/reference/naive-count.js';
 import { cohomologyPieces, kTheoryPieces } from '../unit/reference/puzzle-pieces.js';
+import { commandWords, expectReplayReproduces } from '../helpers/contracts.js';
 import { cli } from './cli-process.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-query-'));
@@ -44,8 +45,7 @@ describe('status, counterexamples, replay and schema (built CLI)', () => {
 
   it('the printed replay command recomputes the instance with both boundaries, values and puzzles', () => {
     expect(replayCmd).toMatch(/^puzzlesweep replay /);
-    const args = replayCmd.replace(/^puzzlesweep /, '').split(' ').map((a) => a.replace(/^'|'$/g, ''));
-    const r = cli(args);
+    const r = cli(commandWords(replayCmd).slice(1));
     expect(r.status).toBe(1);
     expect(r.stdout).toContain('fails (counterexample)');
     expect(r.stdout).toMatch(/left: cohomology/);
@@ -54,6 +54,22 @@ describe('status, counterexamples, replay and schema (built CLI)', () => {
     const bad = cli(['replay', CLAIM, '--instance', 'n=4']);
     expect(bad.status).toBe(2);
     expect(bad.stderr).toContain('[invalid_argument]');
+  });
+
+  it('replay --json reproduces every stored counterexample of the smallest class: boundaries, values, verdict', () => {
+    type Side = { sides: string[]; text: string };
+    const stored = JSON.parse(cli(['counterexamples', CLAIM, '--db', db, '--smallest', '--json']).stdout) as { classKey: string; index: string; left: Side; right: Side }[];
+    const seen = (m: Side) => ({ sides: m.sides, text: m.text });
+    expectReplayReproduces(
+      stored,
+      (c) => {
+        const r = cli(['replay', CLAIM, '--instance', `${c.classKey}:${c.index}`, '--json']);
+        const out = JSON.parse(r.stdout) as { status: string; left: Side; right: Side };
+        return { exit: r.status, status: out.status, left: seen(out.left), right: seen(out.right) };
+      },
+      (c) => ({ exit: 1, status: 'fails', left: seen(c.left), right: seen(c.right) }),
+      (c) => `${c.classKey}:${c.index}`,
+    );
   });
 
   it('schema --out writes the JSON Schema that the committed schema file and the claim files use', () => {

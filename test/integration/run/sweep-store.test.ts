@@ -5,7 +5,8 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { parseRunOptions, type RunOptionsInput } from '../../../src/run/run-options.js';
 import { runSweep } from '../../../src/run/run-sweep.js';
 import { listCounterexamples, listRuns, listVerified, openStore } from '../../../src/store/index.js';
-import { FAKE_RUNTIME, fakeClaim } from '../../fixtures/fake-claim.js';
+import { FAKE_RUNTIME, fakeClaim, palindromeCount } from '../../fixtures/fake-claim.js';
+import { expectCountsRederivable, expectSameMembers } from '../../helpers/contracts.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-sweep-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -51,6 +52,49 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
     expect(state.counterexamples.sort()).toEqual(expectedFailures(8, 5).sort());
     expect(state.verified).toEqual(['n=1/modular', 'n=2/modular', 'n=3/modular', 'n=4/modular']);
     expect(summary.claims[0]!.firstCounterexample?.replay).toContain("replay fake-claim --instance n=5:0");
+  });
+
+  it('prints only counts that a brute force over the family re-derives', async () => {
+    const fresh = join(dir, 'counts.sqlite');
+    const summary = await sweep(fresh, claim);
+    const failing = (n: number) => (n >= 5 ? palindromeCount(n) : 0); // the fake's rule, counted directly
+    const all = Array.from({ length: 8 }, (_, k) => k + 1);
+    const total = all.reduce((a, n) => a + 2 ** n, 0);
+    const fails = all.reduce((a, n) => a + failing(n), 0);
+    const derived: Record<string, number | string> = {
+      'claims[0].instancesChecked': total,
+      'claims[0].holds': total - fails,
+      'claims[0].skippedZero': 0,
+      'claims[0].paired': 0,
+      'claims[0].overturned': 0,
+      'claims[0].newCounterexamples': fails,
+      'claims[0].counterexamples': fails,
+      'claims[0].rechecked.checked': 0,
+      'claims[0].rechecked.stillFail': 0,
+      'claims[0].rechecked.nowHold': 0,
+      'claims[0].firstCounterexample.index': 0, // n = 5: the word 00000 is the first palindrome
+      'claims[0].firstCounterexample.left.sides[0]': '00000', // the word of index 0 in class n = 5
+      'claims[0].firstCounterexample.right.sides[0]': '00000',
+      'claims[0].firstCounterexample.left.text': 1, // the fake's values: 1 on the left, 2 on a failing right
+      'claims[0].firstCounterexample.left.json': 1,
+      'claims[0].firstCounterexample.right.text': 2,
+      'claims[0].firstCounterexample.right.json': 2,
+      workerCrashes: 0,
+      exitCode: 1,
+    };
+    all.forEach((n, i) => {
+      derived[`claims[0].classes[${i}].instances`] = 2 ** n;
+      derived[`claims[0].classes[${i}].checked`] = 2 ** n;
+      derived[`claims[0].classes[${i}].holds`] = 2 ** n - failing(n);
+      derived[`claims[0].classes[${i}].fails`] = failing(n);
+    });
+    expectCountsRederivable(summary, derived, [
+      { path: /elapsedMs$/, why: 'a time' },
+      { path: /runId$/, why: 'an id' },
+      { path: /errorBound$/, why: 'a bound, not a count' },
+      { path: /(size|lengths\[\d\]|firstCounterexample\.size)$/, why: 'the family shape, an input' },
+    ]);
+    expectSameMembers(storeState(fresh, claim.fingerprint).counterexamples, expectedFailures(8, 5));
   });
 
   it('resumes without redoing work, re-checks stored counterexamples first, and extends a raised bound', async () => {

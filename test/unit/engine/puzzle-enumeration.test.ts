@@ -1,40 +1,23 @@
 import { describe, expect, it } from 'vitest';
 import {
   countBoundary,
-  edgeKey,
   enumeratePuzzles,
   fillingCountSemiring,
   integerSemiring,
   makeRegion,
-  sideEdges,
   theoryPieceSet,
-  triangleEdges,
   type Puzzle,
 } from '../../../src/engine/index.js';
 import { labelings, regionShapes } from '../../support/boundaries.js';
-
-// An independent validity check of one filling: every edge gets one label from all triangles that
-// contain it, boundary edges carry the side strings, and every triangle of the region is covered once.
-function checkPuzzle(p: Puzzle, triangles: number): void {
-  const labels = new Map<string, string>();
-  for (const placed of p.pieces) {
-    triangleEdges(placed.triangle).forEach((e, slot) => {
-      const key = edgeKey(e);
-      const label = placed.piece.labels[slot]!;
-      const old = labels.get(key);
-      if (old !== undefined) expect(old, `edge ${key}`).toBe(label);
-      labels.set(key, label);
-    });
-  }
-  sideEdges(p.region).forEach((edges, side) => edges.forEach((e, k) => expect(labels.get(edgeKey(e))).toBe([...p.sides[side]!][k])));
-  expect(new Set(p.pieces.map((q) => `${q.triangle.orientation}${q.triangle.x},${q.triangle.y}`)).size).toBe(triangles);
-}
+import { expectDeterministicEnumeration } from '../../helpers/contracts.js';
+import { checkPuzzle } from '../../helpers/check-puzzle.js';
 
 describe('enumeratePuzzles', () => {
-  it.each(['cohomology', 'k-theory', 'dual-k-theory', 'equivariant'])('yields exactly the counted, valid fillings in %s (every labeling, N ≤ 3)', (theory) => {
+  // Every labeling with N ≤ 2 here; test/math/engine/puzzle-enumeration.test.ts goes to N ≤ 3.
+  it.each(['cohomology', 'k-theory', 'dual-k-theory', 'equivariant'])('yields exactly the counted, valid fillings in %s (every labeling, N ≤ 2)', (theory) => {
     const pieces = theoryPieceSet(theory);
     let seen = 0;
-    for (const lengths of regionShapes(3)) {
+    for (const lengths of regionShapes(2)) {
       const region = makeRegion(lengths);
       const n = region.size;
       const triangles = n * n - lengths[1]! ** 2 - lengths[3]! ** 2 - lengths[5]! ** 2;
@@ -51,6 +34,17 @@ describe('enumeratePuzzles', () => {
       }
     }
     expect(seen).toBeGreaterThan(0);
+  });
+
+  it('enumerates deterministically, each filling once, on every labeling of the triangle of side 3 (cohomology, equivariant)', () => {
+    const key = (p: Puzzle) => p.pieces.map((q) => `${q.triangle.orientation}${q.triangle.x},${q.triangle.y}:${q.piece.labels.join('/')}`).join(' ');
+    let fillings = 0;
+    for (const theory of ['cohomology', 'equivariant']) {
+      const pieces = theoryPieceSet(theory);
+      const region = makeRegion([3, 0, 3, 0, 3, 0]);
+      for (const sides of labelings(region.lengths)) fillings += expectDeterministicEnumeration(() => enumeratePuzzles(region, sides, pieces), key).length;
+    }
+    expect(fillings).toBeGreaterThan(0);
   });
 
   it('is lazy: taking one puzzle of a boundary with many does not build the rest', () => {
