@@ -1,0 +1,89 @@
+import { addInt, addPoly, constantPoly, isZeroInt, mulInt, mulPoly, toBigInt, type Polynomial, type SafeInt } from '../../engine/index.js';
+import type { Value } from '../measure.js';
+import { nextString } from '../multiset-rank.js';
+import type { CompiledBinder, CompiledTerm } from './compile-formula.js';
+import type { StringEnv } from './string-expr.js';
+
+/** The value of one boundary in one theory (exact: integers or polynomials). */
+export type ValueOf = (theory: string, lengths: readonly number[], sides: readonly string[]) => Value;
+
+type Exact = { kind: 'int'; v: SafeInt } | { kind: 'poly'; v: Polynomial };
+
+const asPoly = (x: Exact): Polynomial => (x.kind === 'poly' ? x.v : constantPoly(toBigInt(x.v)));
+const isZero = (x: Exact) => (x.kind === 'int' ? isZeroInt(x.v) : x.v.size === 0);
+
+function exact(v: Value): Exact {
+  if (v.kind === 'int' || v.kind === 'poly') return v;
+  throw new Error(`formula values are exact integers or polynomials, received a ${v.kind} value`);
+}
+
+function add(a: Exact, b: Exact): Exact {
+  if (a.kind === 'int' && b.kind === 'int') return { kind: 'int', v: addInt(a.v, b.v) };
+  return { kind: 'poly', v: addPoly(asPoly(a), asPoly(b)) };
+}
+
+function mul(a: Exact, b: Exact): Exact {
+  if (a.kind === 'int' && b.kind === 'int') return { kind: 'int', v: mulInt(a.v, b.v) };
+  return { kind: 'poly', v: mulPoly(asPoly(a), asPoly(b)) };
+}
+
+/** Every string with the given label counts, in lexicographic order. */
+function* arrangements(labels: number[], alphabet: readonly string[]): Generator<string> {
+  const a = [...labels].sort((x, y) => x - y);
+  do yield a.map((k) => alphabet[k]!).join('');
+  while (nextString(a));
+}
+
+function* binderStrings(b: CompiledBinder, env: StringEnv, variables: Readonly<Record<string, number>>, alphabet: readonly string[]): Generator<string> {
+  if (b.kind === 'content') {
+    yield* arrangements([...b.of.build(env, variables)].map((c) => alphabet.indexOf(c)), alphabet);
+    return;
+  }
+  const n = evalLength(b, variables);
+  if (b.ones !== undefined) {
+    const ones = b.ones.constant + Object.entries(b.ones.coefficients).reduce((s, [k, c]) => s + c * (variables[k] ?? 0), 0);
+    const one = alphabet.indexOf('1');
+    const zero = alphabet.indexOf('0');
+    yield* arrangements([...new Array<number>(n - ones).fill(zero), ...new Array<number>(ones).fill(one)], alphabet);
+    return;
+  }
+  // Every string of length n: each content in turn.
+  const counts = (rest: number, parts: number): number[][] => (parts === 1 ? [[rest]] : Array.from({ length: rest + 1 }, (_, k) => counts(rest - k, parts - 1).map((c) => [k, ...c])).flat());
+  for (const c of counts(n, alphabet.length)) yield* arrangements(c.flatMap((m, k) => new Array<number>(m).fill(k)), alphabet);
+}
+
+function evalLength(b: Extract<CompiledBinder, { kind: 'length' }>, variables: Readonly<Record<string, number>>): number {
+  return b.length.constant + Object.entries(b.length.coefficients).reduce((s, [k, c]) => s + c * (variables[k] ?? 0), 0);
+}
+
+/** Σ over the terms of coefficient · Σ_η Π value(boundary), for the boundary b with `sides`. */
+export function evaluateTerms(terms: readonly CompiledTerm[], sides: readonly string[], variables: Readonly<Record<string, number>>, valueOf: ValueOf, alphabet: readonly string[]): Value {
+  let total: Exact = { kind: 'int', v: 0 };
+  for (const term of terms) {
+    const bound = new Map<string, string>();
+    const env: StringEnv = { sides, bound };
+    let sum: Exact = { kind: 'int', v: 0 };
+    const go = (k: number): void => {
+      if (k === term.binders.length) {
+        let product: Exact = { kind: 'int', v: 1 };
+        for (const p of term.product) {
+          const s = p.sides.map((x) => x.build(env, variables));
+          const v = exact(valueOf(p.theory, s.map((x) => [...x].length), s));
+          if (isZero(v)) return;
+          product = mul(product, v);
+        }
+        sum = add(sum, product);
+        return;
+      }
+      const b = term.binders[k]!;
+      for (const s of binderStrings(b, env, variables, alphabet)) {
+        bound.set(b.name, s);
+        go(k + 1);
+      }
+      bound.delete(b.name);
+    };
+    go(0);
+    total = add(total, mul({ kind: 'int', v: term.coefficient }, sum));
+  }
+  return total;
+}
