@@ -37,7 +37,13 @@ export interface InstanceResult {
   /** `paired`: the transform is an involution and this boundary's partner (lower index) stands for it. */
   readonly status: 'holds' | 'fails' | 'skipped_zero' | 'paired';
   readonly left: Measured;
+  /** T(b) measured in its own right: exactly what `count` prints for that boundary. */
   readonly right: Measured;
+  /** For substitution relations: σ(right), the value compared with `left`, and σ written out. */
+  readonly substituted?: Measured;
+  readonly substitution?: string;
+  /** `holds` with both compared values zero: true but vacuous evidence. */
+  readonly vacuous?: boolean;
   /** For "equal up to some permutation": the permutation found (1-based images of y_1..y_N). */
   readonly permutation?: readonly number[];
   /**
@@ -47,7 +53,10 @@ export interface InstanceResult {
    */
   readonly permutations?: readonly (readonly number[])[];
   readonly permutationsTruncated?: boolean;
-  /** For `paired`: the index of the partner T(b) inside the same class, which was checked instead. */
+  /**
+   * For `paired`: the index of the partner T(b) inside the same class, which was checked instead. For
+   * the representative of a pair (T(b) ≠ b, T(b) later in the class): T(b)'s index, decided by this result too.
+   */
   readonly partnerIndex?: bigint;
   /** `modular`: values compared by evaluation modulo primes; `errorBound` is the chance of a false "holds". */
   readonly method: 'exact' | 'modular';

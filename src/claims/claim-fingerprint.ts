@@ -23,7 +23,17 @@ export function canonicalClaimJson(claim: Claim): string {
   return JSON.stringify(canonical(rest));
 }
 
-/** sha256 (hex) of the canonical claim and the engine version: a changed claim never reuses old results. */
+/**
+ * The claim's mathematics as canonical JSON: no `$schema`, no `statement` and no variable upper bounds.
+ * Rewording a claim changes nothing, and raising a bound only adds classes (each class claims the same).
+ */
+export function mathematicalClaimJson(claim: Claim): string {
+  const { $schema: _schema, statement: _statement, ...rest } = claim;
+  const family = { ...rest.family, variables: rest.family.variables.map(({ name, min }) => ({ name, min })) };
+  return JSON.stringify(canonical({ ...rest, family }));
+}
+
+/** sha256 (hex) of the claim's mathematics and the engine version: a changed claim never reuses old results. */
 export function claimFingerprint(claim: Claim, engineVersion: string = ENGINE_VERSION): string {
-  return createHash('sha256').update(canonicalClaimJson(claim)).update('\u0000').update(engineVersion).digest('hex');
+  return createHash('sha256').update(mathematicalClaimJson(claim)).update('\u0000').update(engineVersion).digest('hex');
 }

@@ -1,23 +1,16 @@
 import { z } from 'zod';
 import { BUILTIN_THEORIES } from '../engine/index.js';
-import { EXPRESSION_PATTERN } from './affine.js';
+import { measureSchema } from './measures/measure-registry.js';
+import { relationSchema } from './relations/relation-registry.js';
+import { expressionSchema, sideSchema } from './schema-parts.js';
+import { transformStepSchema } from './steps/step-registry.js';
 import { pieceSetSchema } from './piece-set-schema.js';
 
 /** Where `puzzlesweep schema` writes the JSON Schema, relative to the repository root. */
 export const CLAIM_SCHEMA_FILE = 'conjectures/schema/claim.schema.json';
 
-const expression = z
-  .union([z.number().int(), z.string().regex(EXPRESSION_PATTERN, "Expression: expected an integer, a variable name or a sum such as 'a+b', 'n-1' or '2*a+1'")], {
-    error: "Expression: expected an integer, a variable name or a sum such as 'a+b', 'n-1' or '2*a+1'",
-  })
-  .describe("An integer, a variable name, or a sum/difference of integer multiples of variables: 3, 'n', 'a+b', '2*a+1', 'n-1'.");
-
-const side = z
-  .number({ error: 'Side number: expected an integer from 1 to 6' })
-  .int('Side number: expected an integer from 1 to 6')
-  .min(1, 'Side number: expected an integer from 1 to 6')
-  .max(6, 'Side number: expected an integer from 1 to 6')
-  .describe('A side of the region, 1..6 clockwise: 1 up-right, 2 right, 3 down-right, 4 down-left, 5 left, 6 up-left.');
+const expression = expressionSchema;
+const side = sideSchema;
 
 const theory = z
   .union([z.enum(BUILTIN_THEORIES), pieceSetSchema], {
@@ -61,82 +54,8 @@ const family = z
   })
   .strict();
 
-const sideList = z.union([z.literal('all'), z.array(side).min(1, 'Sides: expected at least one side')], {
-  error: "Sides: expected 'all' or a list of side numbers 1..6",
-});
-
-const step = z.discriminatedUnion(
-  'type',
-  [
-    z
-      .object({ type: z.literal('rotate'), degrees: z.number().int().multipleOf(60, 'Rotation: expected a multiple of 60 degrees') })
-      .strict()
-      .describe('Rotate the region clockwise by `degrees` (a multiple of 60; negative turns counterclockwise). 60°: sides [σ6, σ1, …, σ5].'),
-    z.object({ type: z.literal('mirror') }).strict().describe('Mirror left-right: sides [rev σ3, rev σ2, rev σ1, rev σ6, rev σ5, rev σ4].'),
-    z
-      .object({
-        type: z.literal('complement'),
-        sides: sideList.default('all'),
-        labelMap: z.record(z.string(), z.string()).optional().describe('For alphabets other than {0,1}: the label permutation to apply.'),
-      })
-      .strict()
-      .describe('Exchange labels 0 ↔ 1 on the chosen sides (or all).'),
-    z
-      .object({ type: z.literal('exchange'), sides: z.tuple([side, side], { error: 'Exchanged sides: expected two side numbers' }) })
-      .strict()
-      .describe('Exchange the strings of two sides of equal length.'),
-    z.object({ type: z.literal('reverse'), sides: sideList }).strict().describe('Reverse the strings of the chosen sides.'),
-    z.object({ type: z.literal('completeToTriangle') }).strict().describe('Glue the cut-off corners back: the completed triangle of side s6+s1+s2.'),
-  ],
-  { error: "Transform step type: expected one of 'rotate' | 'mirror' | 'complement' | 'exchange' | 'reverse' | 'completeToTriangle'" },
-);
-
-const substitutionStep = z.discriminatedUnion(
-  'type',
-  [
-    z.object({ type: z.literal('reverseBlock'), from: expression, to: expression }).strict().describe('y_m ↦ y_(from+to−m) for from ≤ m ≤ to.'),
-    z
-      .object({ type: z.literal('shiftBlock'), from: expression, to: expression, by: expression })
-      .strict()
-      .describe('y_m ↦ y_(from + (m−from+by) mod (to−from+1)) for from ≤ m ≤ to.'),
-    z
-      .object({ type: z.literal('explicit'), images: z.array(z.number().int().min(1, 'Image: expected an index ≥ 1')).min(1) })
-      .strict()
-      .describe('y_m ↦ y_(images[m−1]) for m ≤ images.length (a permutation of 1..length); later variables stay.'),
-  ],
-  { error: "Substitution step type: expected one of 'reverseBlock' | 'shiftBlock' | 'explicit'" },
-);
-
-const measure = z.discriminatedUnion(
-  'type',
-  [
-    z.object({ type: z.literal('value') }).strict().describe("The theory's weighted sum over puzzles (an integer or a polynomial)."),
-    z.object({ type: z.literal('puzzles') }).strict().describe('The number of puzzles.'),
-    z
-      .object({ type: z.literal('statistic'), kind: z.string().min(1) })
-      .strict()
-      .describe('The distribution Σ_k (number of puzzles with k pieces of this kind)·t^k.'),
-  ],
-  { error: "Measure type: expected one of 'value' | 'puzzles' | 'statistic'" },
-);
-
-const relation = z.discriminatedUnion(
-  'type',
-  [
-    z.object({ type: z.literal('equal') }).strict(),
-    z
-      .object({ type: z.literal('equalAfterSubstitution'), substitution: z.array(substitutionStep).min(1, 'Substitution: expected at least one step') })
-      .strict()
-      .describe('left = right with y_m ↦ y_σ(m) applied to the right value; σ is the steps composed in order.'),
-    z
-      .object({ type: z.literal('equalUpToPermutation'), searchSpace: z.enum(['blockReversals', 'allPermutations'], { error: "Search space: expected one of 'blockReversals' | 'allPermutations'" }) })
-      .strict()
-      .describe('left = right with SOME y-permutation applied to the right value: blockReversals = reverse one block y_p..y_q (or none); allPermutations = all of y_1..y_N, N ≤ 8.'),
-    z.object({ type: z.literal('lessOrEqual') }).strict().describe('left ≤ right (integer measures only).'),
-    z.object({ type: z.literal('greaterOrEqual') }).strict().describe('left ≥ right (integer measures only).'),
-  ],
-  { error: "Relation type: expected one of 'equal' | 'equalAfterSubstitution' | 'equalUpToPermutation' | 'lessOrEqual' | 'greaterOrEqual'" },
-);
+const measure = measureSchema;
+const relation = relationSchema;
 
 const compare = z
   .object({ measure, relation, rightTheory: theory.optional().describe('Theory of the right-hand side (default: the claim theory).') })
@@ -155,7 +74,7 @@ export const claimSchema = z
     statement: z.string().min(1, 'Statement: expected a nonempty sentence'),
     theory,
     family,
-    transform: z.array(step, { error: 'Transform: expected a list of steps' }).describe('Steps applied to b in order, giving T(b).'),
+    transform: z.array(transformStepSchema, { error: 'Transform: expected a list of steps' }).describe('Steps applied to b in order, giving T(b).'),
     compare,
   })
   .strict()
@@ -166,7 +85,7 @@ export type ClaimInput = z.input<typeof claimSchema>;
 export type TheoryInput = z.infer<typeof theory>;
 export type TransformStep = Claim['transform'][number];
 export type ContentCondition = Claim['family']['conditions'][number];
-export type SubstitutionStep = Extract<Claim['compare']['relation'], { type: 'equalAfterSubstitution' }>['substitution'][number];
+export type { SubstitutionStep } from './substitutions/substitution-registry.js';
 export type Measure = Claim['compare']['measure'];
 export type Relation = Claim['compare']['relation'];
 

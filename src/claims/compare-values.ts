@@ -17,7 +17,7 @@ export function isZeroValue(v: Value): boolean {
   return v.v.every((r) => r === 0);
 }
 
-function equalValues(a: Value, b: Value): boolean {
+export function equalValues(a: Value, b: Value): boolean {
   if (a.kind === 'int' && b.kind === 'int') return toBigInt(a.v) === toBigInt(b.v);
   if (a.kind === 'gen' && b.kind === 'gen') return generatingSemiring.equals(a.v, b.v);
   if (a.kind === 'poly' && b.kind === 'poly') return polyEquals(a.v, b.v);

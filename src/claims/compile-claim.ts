@@ -1,9 +1,12 @@
 import { isBuiltinTheory, makeRegion, theoryPieceSet, type PieceSet } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
-import { addAffine, boxCorners, boxPoints, constantAffine, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
-import { stepSideMap } from './boundary-transform.js';
+import { addAffine, boxCorners, boxPoints, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
+import type { CheckContext, Fail, Where } from './compile-context.js';
+import { measureDef } from './measures/measure-registry.js';
+import { relationDef } from './relations/relation-registry.js';
+import { stepDef } from './steps/step-registry.js';
 import type { Claim, TheoryInput } from './claim-schema.js';
-import { hasIntegerWeights, pieceSetFromJson } from './resolve-theory.js';
+import { pieceSetFromJson } from './resolve-theory.js';
 
 /** A compiled label-count condition (0-based side). */
 export interface CountCondition {
@@ -27,8 +30,6 @@ export interface CompiledClaim {
   /** The measure is a polynomial (value of a theory with position or variable weights). */
   readonly polynomial: boolean;
 }
-
-type Fail = (message: string, path: string, hint?: string) => never;
 
 function failer(file?: string): Fail {
   return (message, path, hint) => {
@@ -86,7 +87,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   // An affine condition holds on the whole box iff it holds at every corner.
   const cornerWhere = (pred: (v: Record<string, number>) => boolean) => corners.find((c) => !pred(c));
   // Conditions involving N = max(N_left, N_right) are not convex, so those are checked at every point.
-  const pointWhere: CornerWhere = (pred) => {
+  const pointWhere: Where = (pred) => {
     for (const v of boxPoints(ranges)) if (!pred(v)) return v;
     return undefined;
   };
@@ -110,9 +111,13 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
 
   checkRegions(variables, lengths, fail);
   const { sameContent, counts } = compileConditions(claim, lengths, left, expr, cornerWhere, fail);
-  const transformedLengths = checkTransform(claim, lengths, left, cornerWhere, fail);
-  const polynomial = claim.compare.measure.type === 'value' && !(hasIntegerWeights(left) && hasIntegerWeights(right));
-  checkCompare(claim, { left, right, polynomial, lengths, transformedLengths, expr, cornerWhere, pointWhere, fail });
+  const integer = measureDef(claim.compare.measure).integer(claim.compare.measure, left) && measureDef(claim.compare.measure).integer(claim.compare.measure, right);
+  const polynomial = claim.compare.measure.type === 'value' && !integer;
+  const ctx: CheckContext = { left, right, lengths, transformedLengths: lengths, integer, polynomial, measureType: claim.compare.measure.type, cornerWhere, pointWhere, expr, fail, path: '' };
+  const transformedLengths = checkTransform(claim, ctx);
+  const full = { ...ctx, transformedLengths };
+  measureDef(claim.compare.measure).check(claim.compare.measure, { ...full, path: 'compare.measure' });
+  relationDef(claim.compare.relation).check(claim.compare.relation, { ...full, path: 'compare.relation' });
   return { claim, left, right, variables, ranges, lengths, transformedLengths, sameContent, counts, polynomial };
 }
 
@@ -140,9 +145,7 @@ function checkRegions(variables: readonly { name: string; min: number; max: numb
   go(0);
 }
 
-type CornerWhere = (pred: (v: Record<string, number>) => boolean) => Record<string, number> | undefined;
-
-function compileConditions(claim: Claim, lengths: Affine[], pieces: PieceSet, expr: (i: ExpressionInput, p: string) => Affine, cornerWhere: CornerWhere, fail: Fail) {
+function compileConditions(claim: Claim, lengths: Affine[], pieces: PieceSet, expr: (i: ExpressionInput, p: string) => Affine, cornerWhere: Where, fail: Fail) {
   const parent = [0, 1, 2, 3, 4, 5];
   const find = (i: number): number => (parent[i] === i ? i : (parent[i] = find(parent[i]!)));
   const counts: CountCondition[] = [];
@@ -174,111 +177,17 @@ function compileConditions(claim: Claim, lengths: Affine[], pieces: PieceSet, ex
   return { sameContent: [...groups.values()].filter((g) => g.length > 1), counts };
 }
 
-function checkTransform(claim: Claim, lengths: Affine[], pieces: PieceSet, cornerWhere: CornerWhere, fail: Fail): Affine[] {
-  let cur = [...lengths];
-  const binary = [...pieces.boundaryLabels].sort().join('') === '01';
+function checkTransform(claim: Claim, ctx: CheckContext): Affine[] {
+  let cur = [...ctx.lengths];
   claim.transform.forEach((step, k) => {
-    const path = `transform[${k}]`;
-    if (step.type === 'exchange') {
-      const [i, j] = [step.sides[0] - 1, step.sides[1] - 1];
-      if (i === j) fail(`Exchanged sides: expected two different sides, received ${i + 1} twice`, `${path}.sides`);
-      const bad = cornerWhere((v) => evalAffine(cur[i]!, v) === evalAffine(cur[j]!, v));
-      if (bad) {
-        fail(
-          `Exchanged sides: expected equal lengths, received side ${i + 1} of length ${evalAffine(cur[i]!, bad)} and side ${j + 1} of length ${evalAffine(cur[j]!, bad)} at ${valuesText(bad)}`,
-          `${path}.sides`,
-          'side numbers refer to the region as left by the previous steps',
-        );
-      }
-    }
-    if (step.type === 'complement') {
-      if (step.labelMap === undefined && !binary) {
-        fail(`Complement: expected the alphabet {0,1} or an explicit labelMap, received labels ${pieces.boundaryLabels.join(' ')}`, path, 'add "labelMap": { "a": "b", "b": "a" } naming the exchange');
-      }
-      if (step.labelMap) {
-        const keys = Object.keys(step.labelMap).sort().join(' ');
-        const values = Object.values(step.labelMap).sort().join(' ');
-        const known = Object.keys(step.labelMap).concat(Object.values(step.labelMap)).find((l) => !pieces.boundaryLabels.includes(l));
-        if (known !== undefined) fail(`Label map: expected boundary labels ${pieces.boundaryLabels.map((l) => `'${l}'`).join(' | ')}, received '${known}'`, `${path}.labelMap`);
-        if (keys !== values) fail(`Label map: expected a permutation of the labels it names, received ${JSON.stringify(step.labelMap)}`, `${path}.labelMap`);
-      }
-    }
-    const m = stepSideMap(step);
-    if (m) cur = m.map((s) => cur[s.from]!);
-    else {
-      const n = addAffine(addAffine(cur[5]!, cur[0]!), cur[1]!);
-      cur = [n, constantAffine(0), n, constantAffine(0), n, constantAffine(0)];
-    }
+    const def = stepDef(step);
+    def.check(step, { ...ctx, lengths: cur, transformedLengths: cur, path: `transform[${k}]` });
+    cur = def.lengths(step, cur);
   });
   return cur;
-}
-
-interface CompareContext {
-  left: PieceSet;
-  right: PieceSet;
-  polynomial: boolean;
-  lengths: Affine[];
-  transformedLengths: Affine[];
-  expr: (i: ExpressionInput, p: string) => Affine;
-  cornerWhere: CornerWhere;
-  pointWhere: CornerWhere;
-  fail: Fail;
 }
 
 /** Number of y variables of a region of these lengths: N = s6+s1+s2. */
 export function sizeOf(lengths: readonly Affine[]): Affine {
   return addAffine(addAffine(lengths[5]!, lengths[0]!), lengths[1]!);
-}
-
-function checkCompare(claim: Claim, c: CompareContext): void {
-  const { measure, relation } = claim.compare;
-  if (measure.type === 'statistic') {
-    for (const [set, path] of [[c.left, 'theory'], [c.right, 'compare.rightTheory']] as const) {
-      const kinds = [...new Set(set.pieces.map((p) => p.kind))];
-      if (!kinds.includes(measure.kind)) {
-        c.fail(`Statistic kind: expected a piece kind of ${set.name} (${kinds.map((k) => `'${k}'`).join(' | ')}), received '${measure.kind}'`, 'compare.measure.kind', path === 'theory' ? undefined : 'the right-hand theory lacks this kind');
-      }
-    }
-  }
-  const integer = measure.type === 'puzzles' || (measure.type === 'value' && !c.polynomial);
-  if ((relation.type === 'lessOrEqual' || relation.type === 'greaterOrEqual') && !integer) {
-    c.fail(
-      `Relation ${relation.type}: expected an integer measure ('puzzles', or 'value' of a theory with integer weights), received ${measure.type === 'statistic' ? 'a statistic distribution' : 'a polynomial value'}`,
-      'compare.relation',
-      "compare with 'equal', or measure 'puzzles'",
-    );
-  }
-  if ((relation.type === 'equalAfterSubstitution' || relation.type === 'equalUpToPermutation') && !c.polynomial) {
-    c.fail(`Relation ${relation.type}: expected a polynomial measure ('value' of a theory with y variables), received ${measure.type === 'value' ? 'an integer value' : `measure '${measure.type}'`}`, 'compare.relation', "use 'equal' for values without y variables");
-  }
-  const nRight = sizeOf(c.transformedLengths);
-  const nLeft = sizeOf(c.lengths);
-  const n = (v: Record<string, number>) => Math.max(evalAffine(nRight, v), evalAffine(nLeft, v));
-  if (relation.type === 'equalUpToPermutation' && relation.searchSpace === 'allPermutations') {
-    const bad = c.cornerWhere((v) => n(v) <= 8);
-    if (bad) c.fail(`Permutation search: expected at most 8 variables, received ${n(bad)} at ${valuesText(bad)}`, 'compare.relation.searchSpace', "lower the variable bounds or search 'blockReversals'");
-  }
-  if (relation.type === 'equalAfterSubstitution') {
-    relation.substitution.forEach((s, k) => {
-      const path = `compare.relation.substitution[${k}]`;
-      if (s.type === 'explicit') {
-        const sorted = [...s.images].sort((a, b) => a - b);
-        if (sorted.some((x, i) => x !== i + 1)) c.fail(`Images: expected a permutation of 1..${s.images.length}, received [${s.images.join(',')}]`, `${path}.images`);
-        const bad = c.pointWhere((v) => s.images.length <= n(v));
-        if (bad) c.fail(`Images: expected at most N = ${n(bad)} entries, received ${s.images.length} at ${valuesText(bad)}`, `${path}.images`, 'N = s6+s1+s2 of the larger completed triangle');
-        return;
-      }
-      const from = c.expr(s.from, `${path}.from`);
-      const to = c.expr(s.to, `${path}.to`);
-      if (s.type === 'shiftBlock') c.expr(s.by, `${path}.by`);
-      const bad = c.pointWhere((v) => 1 <= evalAffine(from, v) && evalAffine(from, v) <= evalAffine(to, v) && evalAffine(to, v) <= n(v));
-      if (bad) {
-        c.fail(
-          `Substitution block: expected 1 ≤ from ≤ to ≤ N, received from = ${evalAffine(from, bad)}, to = ${evalAffine(to, bad)}, N = ${n(bad)} at ${valuesText(bad)}`,
-          path,
-          'indices are those of y_1..y_N, N = s6+s1+s2 of the completed triangle',
-        );
-      }
-    });
-  }
 }

@@ -1,13 +1,15 @@
 import { AppError } from '../errors.js';
 import { evalAffine } from './affine.js';
-import { applySideMap, applyTransform, composeSideMaps, isIdentityMap, transformSideMap } from './boundary-transform.js';
+import { substitutePoly } from '../engine/index.js';
+import { applySideMap, applyTransform } from './boundary-transform.js';
 import type { EvaluateOptions, Evaluator, Instance, InstanceResult, Measured, SizeClass } from './claim-api.js';
-import type { Claim } from './claim-schema.js';
-import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measured, relationHolds } from './compare-values.js';
+import type { ClaimProgram } from './compile-claim-program.js';
+import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measured } from './compare-values.js';
 import { sizeOf } from './compile-claim.js';
 import { Meter, type Mode, type Value } from './measure.js';
+import { permutationText } from './permutation-text.js';
 import { planClaim } from './plan-claim.js';
-import { isInvolution, substitutionFor, type Permutation } from './substitution.js';
+import { isIdentity, isInvolution, type Permutation } from './substitution.js';
 
 /** Extra knobs for tests and benchmarks. */
 export interface EvaluatorTuning {
@@ -22,22 +24,17 @@ function unmeasured(theory: string, lengths: readonly number[], sides: readonly 
 }
 
 /** Checks instances of a claim: left = measure of b in the claim theory, right = measure of T(b) in the right theory. */
-export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: EvaluatorTuning = {}): Evaluator {
-  const plan = planClaim(claim);
-  const { compiled } = plan;
+export function createEvaluator(program: ClaimProgram, options: EvaluateOptions, tuning: EvaluatorTuning = {}): Evaluator {
+  const plan = planClaim(program);
+  const compiled = program;
+  const { claim, names, sideMap } = program;
   const { measure, relation } = claim.compare;
-  const names = [...new Set([compiled.left, compiled.right].flatMap((p) => p.pieces.flatMap((q) => (q.weight.type === 'variable' ? [q.weight.name] : []))))].sort();
   const leftMeter = new Meter(compiled.left, measure, names, tuning.cacheSize);
   const rightMeter = new Meter(compiled.right, measure, names, tuning.cacheSize);
-  const sideMap = transformSideMap(claim.transform);
   const sameTheory = claim.compare.rightTheory === undefined || JSON.stringify(claim.compare.rightTheory) === JSON.stringify(claim.theory);
   // {b, T(b)} is checked once when T is an involution and the comparison is symmetric.
-  const involutive =
-    (tuning.pairing ?? true) &&
-    sideMap !== undefined &&
-    isIdentityMap(composeSideMaps(sideMap, sideMap)) &&
-    sameTheory &&
-    (relation.type === 'equal' || relation.type === 'equalAfterSubstitution');
+  const involutive = (tuning.pairing ?? true) && program.involutive && sameTheory && program.relation.symmetric;
+  const searchSpace = program.relation.searchSpace?.(relation);
   // Boundary labels of one UTF-16 unit (all but exotic ones) let a side's length be its string length.
   const singleUnitLabels = compiled.left.boundaryLabels.every((l) => l.length === 1);
   const classes = new Map<string, { cls: SizeClass; sigma: Permutation | undefined; m: number }>();
@@ -46,7 +43,9 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
     if (!c) {
       const cls = plan.classForKey(key);
       const m = Math.max(evalAffine(sizeOf(compiled.lengths), cls.variables), evalAffine(sizeOf(compiled.transformedLengths), cls.variables));
-      const sigma = relation.type === 'equalAfterSubstitution' ? substitutionFor(relation.substitution, cls.variables, m) : undefined;
+      const s = program.relation.substitution?.(relation, cls.variables, m);
+      // The identity substitutes nothing: both sides are then compared as they are.
+      const sigma = s && !isIdentity(s) ? s : undefined;
       c = { cls, sigma, m };
       classes.set(key, c);
     }
@@ -85,55 +84,72 @@ export function createEvaluator(claim: Claim, options: EvaluateOptions, tuning: 
       }
       pairable = order !== undefined && order > 0;
     }
-    const permutationSearch = relation.type === 'equalUpToPermutation';
-    let mode: Mode = exactOnly || !compiled.polynomial || permutationSearch ? 'exact' : 'modular';
+    // A representative also decides its partner T(b), whose index is ranked only if someone reads it.
+    const partner = pairable ? { get partnerIndex() { return plan.indexOf(cls, t.sides); } } : {};
+    let mode: Mode = exactOnly || !compiled.polynomial || searchSpace ? 'exact' : 'modular';
     // Sweeps reuse cached one-pass sweeps in exact mode too; only a confirmation recomputes everything.
     const cache = !confirming;
-    const measureBoth = (mode: Mode): [Value, Value | undefined] => {
+    // right: T(b)'s own value; compared: σ(right) for a substitution. A modular sweep measures only σ(right)
+    // (σ moves the evaluation point); exact mode measures the own value and substitutes it.
+    const measureAll = (mode: Mode): { left: Value; right?: Value; compared?: Value } => {
       const left = leftMeter.value(lengths, sides, mode, undefined, cache);
       // A zero left value is skipped, unless it stands for its partner too, whose value is the right one here.
-      if (claim.family.nonzeroOnly && isZeroValue(left) && !pairable) return [left, undefined];
-      return [left, rightMeter.value(t.lengths, t.sides, mode, sigma, cache)];
+      if (claim.family.nonzeroOnly && isZeroValue(left) && !pairable) return { left };
+      if (!sigma) {
+        const right = rightMeter.value(t.lengths, t.sides, mode, undefined, cache);
+        return { left, right, compared: right };
+      }
+      if (mode === 'modular') return { left, compared: rightMeter.value(t.lengths, t.sides, mode, sigma, cache) };
+      const right = rightMeter.value(t.lengths, t.sides, mode, undefined, cache);
+      const compared: Value = right.kind === 'poly' ? { kind: 'poly', v: substitutePoly(right.v, (k) => (k < sigma.length ? sigma[k]! - 1 : k)) } : right;
+      return { left, right, compared };
     };
-    let [left, right] = measureBoth(mode);
+    let values = measureAll(mode);
     const show = (v: Value, theory: string, ls: readonly number[], ss: readonly string[]) => measured(theory, ls, ss, v, names, confirming);
-    if (right === undefined || (claim.family.nonzeroOnly && isZeroValue(left) && isZeroValue(right))) {
+    const shown = () => ({
+      left: show(values.left, compiled.left.name, lengths, sides),
+      right: values.right ? show(values.right, compiled.right.name, t.lengths, t.sides) : unmeasured(compiled.right.name, t.lengths, t.sides, values.compared ? '(only σ(R) computed)' : '(not computed)'),
+      ...(sigma && values.compared ? { substituted: show(values.compared, compiled.right.name, t.lengths, t.sides), substitution: permutationText(sigma) } : {}),
+    });
+    const bothZero = () => isZeroValue(values.left) && values.compared !== undefined && isZeroValue(values.compared);
+    if (values.compared === undefined || (claim.family.nonzeroOnly && bothZero())) {
       return {
         ...base,
         status: 'skipped_zero',
-        left: show(left, compiled.left.name, lengths, sides),
-        right: right ? show(right, compiled.right.name, t.lengths, t.sides) : unmeasured(compiled.right.name, t.lengths, t.sides, '(not computed)'),
+        ...shown(),
         method: mode,
+        ...partner,
         // "is zero" was itself a modular identity test, with the same kind of error bound
-        ...(mode === 'modular' ? { errorBound: errorBoundOf(left, right ?? left) } : {}),
+        ...(mode === 'modular' ? { errorBound: errorBoundOf(values.left, values.compared ?? values.left) } : {}),
       };
     }
-    if (permutationSearch && left.kind === 'poly' && right.kind === 'poly') {
-      const { found, truncated } = findPermutations(relation.searchSpace, m, left.v, right.v);
+    if (searchSpace && values.left.kind === 'poly' && values.compared.kind === 'poly') {
+      const { found, truncated } = findPermutations(searchSpace, m, values.left.v, values.compared.v);
       return {
         ...base,
         status: found.length ? 'holds' : 'fails',
-        left: show(left, compiled.left.name, lengths, sides),
-        right: show(right, compiled.right.name, t.lengths, t.sides),
+        ...shown(),
+        vacuous: bothZero(),
         ...(found.length ? { permutation: found[0]!, permutations: found } : {}),
         ...(truncated ? { permutationsTruncated: true } : {}),
         method: 'exact',
       };
     }
-    let holds = relationHolds(relation, left, right);
-    let errorBound = mode === 'modular' ? errorBoundOf(left, right) : 0;
+    let holds = program.relation.holds(values.left, values.compared);
+    let errorBound = mode === 'modular' ? errorBoundOf(values.left, values.compared) : 0;
     if (holds && mode === 'modular' && errorBound > MAX_MODULAR_ERROR) {
       // The modular test would say too little here: decide exactly instead.
       mode = 'exact';
-      [left, right] = measureBoth(mode) as [Value, Value];
-      holds = relationHolds(relation, left, right);
+      values = measureAll(mode);
+      holds = program.relation.holds(values.left, values.compared!);
       errorBound = 0;
     }
     return {
       ...base,
       status: holds ? 'holds' : 'fails',
-      left: show(left, compiled.left.name, lengths, sides),
-      right: show(right, compiled.right.name, t.lengths, t.sides),
+      ...shown(),
+      vacuous: bothZero(),
+      ...partner,
       method: mode,
       ...(mode === 'modular' ? { errorBound } : {}),
     };

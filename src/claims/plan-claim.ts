@@ -2,8 +2,8 @@ import { makeRegion } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
 import { evalAffine } from './affine.js';
 import type { ClaimPlan, Instance, SizeClass } from './claim-api.js';
-import type { Claim } from './claim-schema.js';
-import { compileClaim, type CompiledClaim } from './compile-claim.js';
+import type { ClaimProgram } from './compile-claim-program.js';
+import type { CompiledClaim } from './compile-claim.js';
 import { contentVectors, multinomial, nextString, rankString, unrankString } from './multiset-rank.js';
 
 /** One group of sides sharing a content vector; `sides` in radix order (side 5 last, least significant). */
@@ -31,7 +31,7 @@ interface Layout {
 
 /** A plan with a few extras beyond the runner contract. */
 export interface ClaimPlanExt extends ClaimPlan {
-  readonly compiled: CompiledClaim;
+  readonly compiled: ClaimProgram;
   instancesFrom(cls: SizeClass, start: bigint, end: bigint): Iterable<Instance>;
   /** The sign of index(a) − index(b) without ranking either, or undefined when one is not an instance of `cls`. */
   compareIndex(cls: SizeClass, a: readonly string[], b: readonly string[]): number | undefined;
@@ -123,8 +123,8 @@ function assignments(compiled: CompiledClaim): Record<string, number>[] {
 }
 
 /** The sweep plan of a claim: ordered size classes and the index ↔ instance bijection inside each. */
-export function planClaim(claim: Claim): ClaimPlanExt {
-  const compiled = compileClaim(claim);
+export function planClaim(program: ClaimProgram): ClaimPlanExt {
+  const compiled = program;
   const alphabet = compiled.left.boundaryLabels;
   // Boundary labels are single characters, so a side is read one char per edge.
   const labelIndex = new Map(alphabet.map((a, i) => [a, i]));
@@ -164,13 +164,11 @@ export function planClaim(claim: Claim): ClaimPlanExt {
   const outOfRange = (cls: SizeClass, index: bigint) =>
     new AppError('invalid_argument', `Instance index: expected 0 ≤ index < ${layout(cls).count} in class ${cls.key}, received ${index}`, { path: '--instance' });
 
-  // Variables the comparison's substitution mentions (expressions are plain strings inside it).
-  const relationText = JSON.stringify(claim.compare.relation);
-  const relationVariables = compiled.variables.map((v) => v.name).filter((name) => new RegExp(`(^|[^A-Za-z0-9_])${name}($|[^A-Za-z0-9_])`).test(relationText.replace(/"[A-Za-z]+":/g, ' ')));
+  const { relationVariables } = program;
   return {
     compiled,
     classes(maxOverride) {
-      const c = maxOverride && Object.keys(maxOverride).length ? compileClaim(claim, undefined, maxOverride) : compiled;
+      const c = maxOverride && Object.keys(maxOverride).length ? program.withBounds(maxOverride) : compiled;
       const seen = new Set<string>();
       const out: SizeClass[] = [];
       for (const values of assignments(c)) {

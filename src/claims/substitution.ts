@@ -1,33 +1,15 @@
-import { AppError } from '../errors.js';
-import { evalAffine, parseAffine, type Affine } from './affine.js';
-import type { SubstitutionStep } from './claim-schema.js';
+import { substitutionStepDef, type SubstitutionStep } from './substitutions/substitution-registry.js';
 
 /** A permutation of y_1..y_M as 1-based images: y_m ↦ y_images[m−1]. */
 export type Permutation = readonly number[];
 
-function affine(e: number | string): Affine {
-  return parseAffine(e) as Affine;
-}
-
 /** σ for one class: the steps composed in order (σ = s_last ∘ … ∘ s_1), on y_1..y_m. */
 export function substitutionFor(steps: readonly SubstitutionStep[], values: Readonly<Record<string, number>>, m: number): Permutation {
   let sigma = Array.from({ length: m }, (_, k) => k + 1);
-  steps.forEach((s, k) => {
-    const step = Array.from({ length: m }, (_, i) => i + 1);
-    if (s.type === 'explicit') s.images.forEach((img, i) => (step[i] = img));
-    else {
-      const from = evalAffine(affine(s.from), values);
-      const to = evalAffine(affine(s.to), values);
-      if (!(1 <= from && from <= to && to <= m)) {
-        throw new AppError('invalid_claim', `Substitution block: expected 1 ≤ from ≤ to ≤ ${m}, received from = ${from}, to = ${to}`, { path: `compare.relation.substitution[${k}]` });
-      }
-      const len = to - from + 1;
-      const by = s.type === 'shiftBlock' ? evalAffine(affine(s.by), values) : 0;
-      for (let i = from; i <= to; i++) step[i - 1] = s.type === 'reverseBlock' ? from + to - i : from + ((((i - from + by) % len) + len) % len);
-    }
-    if (step.length > m) throw new AppError('invalid_claim', `Images: expected at most ${m} entries, received ${step.length}`, { path: `compare.relation.substitution[${k}].images` });
+  for (const s of steps) {
+    const step = substitutionStepDef(s).images(s, values, m);
     sigma = sigma.map((x) => step[x - 1]!);
-  });
+  }
   return sigma;
 }
 
@@ -60,4 +42,8 @@ export function* allPermutations(m: number): Generator<Permutation> {
     [a[i], a[j]] = [a[j]!, a[i]!];
     a.splice(i + 1, m - i - 1, ...a.slice(i + 1).reverse());
   }
+}
+
+export function isIdentity(p: Permutation): boolean {
+  return p.every((x, i) => x === i + 1);
 }

@@ -1,5 +1,5 @@
 import { theoryPieceSet, type PieceSet } from '../engine/index.js';
-import { parseClaim, planClaim, type SizeClass } from '../claims/index.js';
+import { compileClaimProgram, planClaim, type SizeClass } from '../claims/index.js';
 import { listCounterexamples, listVerified, type ClaimRecord, type Store } from '../store/index.js';
 import type { PieceSetResolver } from './counterexample-html.js';
 import type { ReportClass, ReportCounterexample, ReportData } from './report-data.js';
@@ -54,7 +54,7 @@ function classRow(cls: SizeClass, instances: bigint, totals: ChunkTotals | undef
 /** Reads one stored claim version into report data, with a resolver for its (possibly custom) theories. */
 export function reportDataFromStore(db: Store, record: ClaimRecord): { data: ReportData; resolve: PieceSetResolver } {
   const json = JSON.parse(record.canonicalJson) as Record<string, unknown> & { compare?: { rightTheory?: unknown } };
-  const plan = planClaim(parseClaim(json));
+  const plan = planClaim(compileClaimProgram(json));
   const stored = listCounterexamples(db, record.fingerprint).filter((c) => c.recheck !== 'holds');
   const verified = new Map(listVerified(db, record.fingerprint).map((v) => [v.classKey, v]));
   const totals = chunkTotals(db, record.fingerprint);

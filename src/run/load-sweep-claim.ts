@@ -1,8 +1,8 @@
-import { canonicalClaimJson, claimFingerprint, ENGINE_VERSION, loadClaim } from '../claims/index.js';
+import { loadClaimProgram } from '../claims/index.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 
 /** Reads and validates a claim file (coded `invalid_claim` errors) and fingerprints it for the store. */
 export function loadSweepClaim(file: string): SweepClaim {
-  const claim = loadClaim(file);
-  return { id: claim.id, canonicalJson: canonicalClaimJson(claim), fingerprint: claimFingerprint(claim), engineVersion: ENGINE_VERSION, file };
+  const p = loadClaimProgram(file);
+  return { id: p.claim.id, canonicalJson: p.canonicalJson, fingerprint: p.fingerprint, engineVersion: p.engineVersion, file };
 }

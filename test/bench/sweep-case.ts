@@ -5,7 +5,7 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { applyTransform, createEvaluator, parseClaim, planClaim, type ClaimInput } from '../../src/claims/index.js';
+import { applyTransform, compileClaimProgram, createEvaluator, parseClaim, planClaim, type ClaimInput } from '../../src/claims/index.js';
 import { countBoundary, integerSemiring, makeRegion } from '../../src/engine/index.js';
 import { loadSweepClaim } from '../../src/run/load-sweep-claim.js';
 import { parseRunOptions } from '../../src/run/run-options.js';
@@ -21,12 +21,12 @@ const rss = () => process.memoryUsage().rss / 2 ** 20;
 // One process-local loop over the first `limit` instances of the claim's first class.
 function inProcess(c: Extract<SweepCase, { limit: number }>): Record<string, unknown> {
   const claim = parseClaim(c.claim);
-  const plan = planClaim(claim);
+  const plan = planClaim(compileClaimProgram(claim));
   const cls = plan.classes()[0]!;
   const n = Math.min(c.limit, Number(plan.instanceCount(cls)));
   const pieces = plan.compiled.left;
   const region = makeRegion(cls.lengths);
-  const evaluator = createEvaluator(claim, { exact: c.kind === 'evaluate' ? c.exact : true }, { pairing: false });
+  const evaluator = createEvaluator(compileClaimProgram(claim), { exact: c.kind === 'evaluate' ? c.exact : true }, { pairing: false });
   const start = performance.now();
   let holds = 0;
   // The batched path walks instances as a sweep's worker does; the baseline names each one afresh.

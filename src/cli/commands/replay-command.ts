@@ -1,6 +1,6 @@
 import { existsSync } from 'node:fs';
 import type { CommandModule } from 'yargs';
-import { createEvaluator, parseClaim, planClaim, type ClaimPlanExt } from '../../claims/index.js';
+import { compileClaimProgram, createEvaluator, planClaim, type ClaimPlanExt } from '../../claims/index.js';
 import type { Instance, Measured } from '../../claims/claim-api.js';
 import { enumeratePuzzles, makeRegion, type PieceSet } from '../../engine/index.js';
 import { AppError, toAppError } from '../../errors.js';
@@ -103,7 +103,7 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
   handler: (args) =>
     runCommand(args.json, () => {
       const { id, json } = claimJson(args.claim, args.db);
-      const claim = parseClaim(JSON.parse(json) as unknown);
+      const claim = compileClaimProgram(JSON.parse(json) as unknown);
       const plan = planClaim(claim);
       const instance = findInstance(plan, args);
       const r = createEvaluator(claim, { exact: true }).confirm(instance);
@@ -116,6 +116,8 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
         ...(r.permutation ? [`permutation: [${r.permutation.join(',')}]`] : []),
         ...measuredText('left', r.left, plan.compiled.left, args.limit),
         ...measuredText('right', r.right, plan.compiled.right, args.limit),
+        // The right value above is T(b)'s own; the relation compares the left value with σ applied to it.
+        ...(r.substituted ? [`σ(right value), σ = ${r.substitution}: ${r.substituted.text}`] : []),
       ];
       process.stdout.write(`${lines.join('\n')}\n`);
       return r.status === 'fails' ? 1 : 0;

@@ -20,11 +20,23 @@ describe('claimFingerprint', () => {
     expect(JSON.parse(canonicalClaimJson(a))).toEqual({ ...a });
   });
 
-  it('changes with the claim and with the engine version', () => {
+  it('changes with the mathematics and with the engine version', () => {
     const a = parseClaim(data);
-    const b = parseClaim({ ...data, family: { ...data.family, variables: [{ name: 'n', min: 1, max: 4 }] } });
-    expect(claimFingerprint(b)).not.toBe(claimFingerprint(a));
+    const lower = parseClaim({ ...data, family: { ...data.family, variables: [{ name: 'n', min: 2, max: 3 }] } });
+    const other = parseClaim({ ...data, transform: [{ type: 'mirror' }] });
+    expect(claimFingerprint(lower)).not.toBe(claimFingerprint(a));
+    expect(claimFingerprint(other)).not.toBe(claimFingerprint(a));
     expect(claimFingerprint(a, '2')).not.toBe(claimFingerprint(a, '1'));
+  });
+
+  it('ignores the statement and the variables\' upper bounds (a raised bound only adds classes; issue 7)', () => {
+    const a = parseClaim(data);
+    const reworded = parseClaim({ ...data, statement: 'Mirror and complement: said differently.' });
+    const raised = parseClaim({ ...data, family: { ...data.family, variables: [{ name: 'n', min: 1, max: 6 }] } });
+    expect(claimFingerprint(reworded)).toBe(claimFingerprint(a));
+    expect(claimFingerprint(raised)).toBe(claimFingerprint(a));
+    // The canonical JSON still keeps both: it is the claim the store can show and recompile.
+    expect(canonicalClaimJson(reworded)).not.toBe(canonicalClaimJson(a));
   });
 
   it('is the same after a round trip through canonical JSON (what the store keeps)', () => {

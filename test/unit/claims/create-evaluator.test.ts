@@ -1,15 +1,15 @@
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { applyTransform, createEvaluator, loadClaim, parseClaim, planClaim, type Claim, type InstanceResult } from '../../../src/claims/index.js';
+import { applyTransform, compileClaimProgram, createEvaluator, loadClaim, parseClaim, planClaim, type Claim, type InstanceResult } from '../../../src/claims/index.js';
 import { countBoundary, fillingCountSemiring, integerSemiring, makeRegion, polynomialSemiring, polyEquals, substitutePoly, theoryPieceSet } from '../../../src/engine/index.js';
 
 const fixtures = fileURLToPath(new URL('../../fixtures/claims/valid/', import.meta.url));
 const lengthsOf = (sides: readonly string[]) => sides.map((s) => [...s].length);
 
 function sweep(claim: Claim, exact = false, tuning = {}): InstanceResult[] {
-  const plan = planClaim(claim);
-  const ev = createEvaluator(claim, { exact }, tuning);
+  const plan = planClaim(compileClaimProgram(claim));
+  const ev = createEvaluator(compileClaimProgram(claim), { exact }, tuning);
   const out: InstanceResult[] = [];
   for (const cls of plan.classes()) for (let i = 0n; i < plan.instanceCount(cls); i++) out.push(ev.evaluate(plan.instanceAt(cls, i)));
   return out;
@@ -31,7 +31,7 @@ describe('createEvaluator', () => {
     const claim = loadClaim(join(fixtures, 'mirror-complement-cohomology.json'));
     const results = sweep(claim);
     expect(results.filter((r) => r.status === 'fails')).toEqual([]);
-    const plan = planClaim(claim);
+    const plan = planClaim(compileClaimProgram(claim));
     // Each unordered pair {b, T(b)} is evaluated exactly once: the paired member names its lower partner.
     for (const r of results.filter((x) => x.status === 'paired')) {
       const cls = plan.classForKey(r.classKey);
@@ -102,8 +102,8 @@ describe('createEvaluator', () => {
       expect(r.errorBound!).toBeLessThan(1e-6);
     }
     expect(exact.every((r) => r.method === 'exact')).toBe(true);
-    const ev = createEvaluator(claim, { exact: false });
-    const plan = planClaim(claim);
+    const ev = createEvaluator(compileClaimProgram(claim), { exact: false });
+    const plan = planClaim(compileClaimProgram(claim));
     const cls = plan.classes()[1]!;
     for (let i = 0n; i < 8n; i++) {
       const inst = plan.instanceAt(cls, i);
@@ -158,9 +158,9 @@ describe('createEvaluator', () => {
       const partner = p.status === 'paired' ? paired.find((x) => x.classKey === r.classKey && x.index === p.partnerIndex)! : p;
       expect(partner.status).toBe('fails');
       // the exact confirmation of that failure agrees with it (a sweep stores only confirmed failures)
-      const plan = planClaim(claim);
+      const plan = planClaim(compileClaimProgram(claim));
       const cls = plan.classes().find((c) => c.key === partner.classKey)!;
-      expect(createEvaluator(claim, { exact: false }).confirm(plan.instanceAt(cls, partner.index)).status).toBe('fails');
+      expect(createEvaluator(compileClaimProgram(claim), { exact: false }).confirm(plan.instanceAt(cls, partner.index)).status).toBe('fails');
     }
     const stat = sweep(loadClaim(join(fixtures, 'custom-statistic.json')));
     expect(stat.some((r) => r.status === 'holds' && r.left.text.includes('t'))).toBe(true);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseClaim, planClaim, type SizeClass } from '../../../src/claims/index.js';
+import { compileClaimProgram, parseClaim, planClaim, type SizeClass } from '../../../src/claims/index.js';
 import { rankString, unrankString, multinomial } from '../../../src/claims/multiset-rank.js';
 
 function claim(family: object, theory: unknown = 'cohomology') {
@@ -67,7 +67,7 @@ describe('multiset ranking', () => {
 
 describe('planClaim', () => {
   it('orders classes by total length, then by the side-length tuple', () => {
-    const plan = planClaim(claim({ sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 4 }, { name: 'b', min: 1, max: 4 }] }));
+    const plan = planClaim(compileClaimProgram(claim({ sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 4 }, { name: 'b', min: 1, max: 4 }] })));
     const classes = plan.classes();
     expect(classes.length).toBe(16);
     for (let k = 1; k < classes.length; k++) {
@@ -80,18 +80,18 @@ describe('planClaim', () => {
   });
 
   it('is a bijection onto all boundaries without conditions', () => {
-    const plan = planClaim(claim({ sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }] }));
+    const plan = planClaim(compileClaimProgram(claim({ sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }] })));
     for (const cls of plan.classes()) checkBijection(plan, cls, () => true);
   });
 
   it('applies content conditions while generating', () => {
-    const plan = planClaim(
+    const plan = planClaim(compileClaimProgram(
       claim({
         sides: ['a', 'b', 'c', 'a+b-c', 'c', 'b'],
         variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }, { name: 'c', min: 1, max: 1 }],
         conditions: [{ type: 'sameContent', sides: [2, 6] }, { type: 'labelCount', side: 1, count: 1 }, { type: 'sameContent', sides: [3, 5] }],
       }),
-    );
+    ));
     for (const cls of plan.classes()) {
       checkBijection(plan, cls, (b) => content(b[1]!, ['0', '1']) === content(b[5]!, ['0', '1']) && content(b[2]!, ['0', '1']) === content(b[4]!, ['0', '1']) && count(b[0]!, '1') === 1);
     }
@@ -103,13 +103,13 @@ describe('planClaim', () => {
       boundaryLabels: ['0', '1', '2'],
       pieces: [{ edges: { horizontal: '0', rising: '0', falling: '0' }, orientations: ['up', 'down'] }, { edges: { horizontal: '1', rising: '1', falling: '1' }, orientations: ['up', 'down'] }, { edges: { horizontal: '2', rising: '2', falling: '2' }, orientations: ['up', 'down'] }],
     };
-    const plan = planClaim(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 2, max: 3 }], conditions: [{ type: 'sameContent', sides: [1, 3, 5] }, { type: 'labelCount', side: 5, count: 1, label: '2' }] }, theory));
+    const plan = planClaim(compileClaimProgram(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 2, max: 3 }], conditions: [{ type: 'sameContent', sides: [1, 3, 5] }, { type: 'labelCount', side: 5, count: 1, label: '2' }] }, theory)));
     const abc = ['0', '1', '2'];
     for (const cls of plan.classes()) checkBijection(plan, cls, (b) => content(b[0]!, abc) === content(b[2]!, abc) && content(b[2]!, abc) === content(b[4]!, abc) && count(b[4]!, '2') === 1, abc);
   });
 
   it('varies side 5 fastest: runs of consecutive indices share sides 1-4 and 6', () => {
-    const plan = planClaim(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 3, max: 3 }] }));
+    const plan = planClaim(compileClaimProgram(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 3, max: 3 }] })));
     const cls = plan.classes()[0]!;
     const rest = (i: bigint) => plan.instanceAt(cls, i).sides.filter((_, k) => k !== 4).join('|');
     let changes = 0;
@@ -119,7 +119,7 @@ describe('planClaim', () => {
   });
 
   it('drops empty classes and rejects out-of-range indices', () => {
-    const plan = planClaim(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 1, max: 3 }, { name: 'k', min: 0, max: 3 }], conditions: [{ type: 'labelCount', side: 1, count: 'k' }] }));
+    const plan = planClaim(compileClaimProgram(claim({ sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 1, max: 3 }, { name: 'k', min: 0, max: 3 }], conditions: [{ type: 'labelCount', side: 1, count: 'k' }] })));
     // k ≤ n: (1,0),(1,1),(2,0..2),(3,0..3) = 9 classes.
     expect(plan.classes().length).toBe(9);
     const cls = plan.classes()[0]!;
@@ -140,6 +140,6 @@ describe('size classes', () => {
       transform: [],
       compare: { measure: { type: 'value' }, relation: { type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 'p', to: 'n' }] } },
     });
-    expect(planClaim(c).classes().map((k) => k.key)).toEqual(['n=3,p=1', 'n=3,p=2']);
+    expect(planClaim(compileClaimProgram(c)).classes().map((k) => k.key)).toEqual(['n=3,p=1', 'n=3,p=2']);
   });
 });

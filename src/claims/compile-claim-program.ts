@@ -1,0 +1,67 @@
+import { claimSchema, type Claim } from './claim-schema.js';
+import { claimZodError } from './claim-zod-error.js';
+import { canonicalClaimJson, claimFingerprint, ENGINE_VERSION } from './claim-fingerprint.js';
+import { compileClaim, type CompiledClaim } from './compile-claim.js';
+import { measureDef } from './measures/measure-registry.js';
+import type { MeasureDef } from './measures/measure-def.js';
+import type { RelationDef } from './relations/relation-def.js';
+import { relationDef } from './relations/relation-registry.js';
+import { composeSideMaps, isIdentityMap, type SideMap } from './side-map.js';
+import { stepDef } from './steps/step-registry.js';
+import { transformSideMap } from './boundary-transform.js';
+
+/** A claim compiled once: validated, theories resolved, expressions parsed, registry entries attached. */
+export interface ClaimProgram extends CompiledClaim {
+  /** The claim as the user wrote it (before defaults), for reports. */
+  readonly source: unknown;
+  readonly file: string | undefined;
+  /** The claim with defaults and sorted keys: what a worker or a stored claim recompiles from. */
+  readonly canonicalJson: string;
+  /** The mathematics only: not the statement, `$schema` or the variables' upper bounds. */
+  readonly fingerprint: string;
+  readonly engineVersion: string;
+  /** The transform as one side map, or undefined when a step is not a relabelling of sides. */
+  readonly sideMap: SideMap | undefined;
+  /** T∘T is the identity on every boundary. */
+  readonly involutive: boolean;
+  readonly relation: RelationDef<Claim['compare']['relation']>;
+  readonly measure: MeasureDef<Claim['compare']['measure']>;
+  /** Family variables the relation mentions: classes of equal lengths differing in these are distinct. */
+  readonly relationVariables: readonly string[];
+  /** Sorted names of the formal (non-y) variables of both theories. */
+  readonly names: readonly string[];
+  /** The transform as it reads, e.g. `exchange sides 1 ↔ 4, then reverse sides 1,4`. */
+  readonly transformText: string;
+  /** The same program with other variable upper bounds (from `--max`). */
+  withBounds(max: Readonly<Record<string, number>> | undefined): ClaimProgram;
+}
+
+/** The only compile: claim JSON (as read) to a typed program; every error is coded with its JSON path. */
+export function compileClaimProgram(json: unknown, file?: string, max?: Readonly<Record<string, number>>): ClaimProgram {
+  const parsed = claimSchema.safeParse(json);
+  if (!parsed.success) throw claimZodError(parsed.error, json, file);
+  return programOf(parsed.data, json, file, max);
+}
+
+function programOf(claim: Claim, source: unknown, file: string | undefined, max: Readonly<Record<string, number>> | undefined): ClaimProgram {
+  const compiled = compileClaim(claim, file, max && Object.keys(max).length ? max : undefined);
+  const relation = relationDef(claim.compare.relation);
+  const sideMap = transformSideMap(claim.transform);
+  const names = [...new Set([compiled.left, compiled.right].flatMap((p) => p.pieces.flatMap((q) => (q.weight.type === 'variable' ? [q.weight.name] : []))))].sort();
+  return {
+    ...compiled,
+    source,
+    file,
+    canonicalJson: canonicalClaimJson(claim),
+    fingerprint: claimFingerprint(claim),
+    engineVersion: ENGINE_VERSION,
+    sideMap,
+    involutive: sideMap !== undefined && isIdentityMap(composeSideMaps(sideMap, sideMap)),
+    relation,
+    measure: measureDef(claim.compare.measure),
+    relationVariables: relation.variables(claim.compare.relation).filter((v) => compiled.variables.some((w) => w.name === v)),
+    names,
+    transformText: claim.transform.map((s) => stepDef(s).text(s)).join(', then ') || 'identity',
+    withBounds: (m) => programOf(claim, source, file, m),
+  };
+}
