@@ -65,3 +65,8 @@ function programOf(claim: Claim, source: unknown, file: string | undefined, max:
     withBounds: (m) => programOf(claim, source, file, m),
   };
 }
+
+/** A program as is, or a parsed claim compiled (for callers that still hold a `Claim`). */
+export function asProgram(claim: Claim | ClaimProgram): ClaimProgram {
+  return 'withBounds' in claim ? claim : compileClaimProgram(claim);
+}

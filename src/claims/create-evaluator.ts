@@ -3,7 +3,8 @@ import { evalAffine } from './affine.js';
 import { substitutePoly } from '../engine/index.js';
 import { applySideMap, applyTransform } from './boundary-transform.js';
 import type { EvaluateOptions, Evaluator, Instance, InstanceResult, Measured, SizeClass } from './claim-api.js';
-import type { ClaimProgram } from './compile-claim-program.js';
+import type { Claim } from './claim-schema.js';
+import { asProgram, type ClaimProgram } from './compile-claim-program.js';
 import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measured } from './compare-values.js';
 import { sizeOf } from './compile-claim.js';
 import { Meter, type Mode, type Value } from './measure.js';
@@ -24,7 +25,8 @@ function unmeasured(theory: string, lengths: readonly number[], sides: readonly 
 }
 
 /** Checks instances of a claim: left = measure of b in the claim theory, right = measure of T(b) in the right theory. */
-export function createEvaluator(program: ClaimProgram, options: EvaluateOptions, tuning: EvaluatorTuning = {}): Evaluator {
+export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: EvaluateOptions, tuning: EvaluatorTuning = {}): Evaluator {
+  const program = asProgram(claimOrProgram);
   const plan = planClaim(program);
   const compiled = program;
   const { claim, names, sideMap } = program;

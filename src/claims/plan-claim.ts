@@ -2,7 +2,8 @@ import { makeRegion } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
 import { evalAffine } from './affine.js';
 import type { ClaimPlan, Instance, SizeClass } from './claim-api.js';
-import type { ClaimProgram } from './compile-claim-program.js';
+import type { Claim } from './claim-schema.js';
+import { asProgram, type ClaimProgram } from './compile-claim-program.js';
 import type { CompiledClaim } from './compile-claim.js';
 import { contentVectors, multinomial, nextString, rankString, unrankString } from './multiset-rank.js';
 
@@ -123,7 +124,8 @@ function assignments(compiled: CompiledClaim): Record<string, number>[] {
 }
 
 /** The sweep plan of a claim: ordered size classes and the index ↔ instance bijection inside each. */
-export function planClaim(program: ClaimProgram): ClaimPlanExt {
+export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
+  const program = asProgram(claim);
   const compiled = program;
   const alphabet = compiled.left.boundaryLabels;
   // Boundary labels are single characters, so a side is read one char per edge.

@@ -1,3 +1,4 @@
+import { AppError } from '../errors.js';
 import { substitutionStepDef, type SubstitutionStep } from './substitutions/substitution-registry.js';
 
 /** A permutation of y_1..y_M as 1-based images: y_m ↦ y_images[m−1]. */
@@ -6,10 +7,13 @@ export type Permutation = readonly number[];
 /** σ for one class: the steps composed in order (σ = s_last ∘ … ∘ s_1), on y_1..y_m. */
 export function substitutionFor(steps: readonly SubstitutionStep[], values: Readonly<Record<string, number>>, m: number): Permutation {
   let sigma = Array.from({ length: m }, (_, k) => k + 1);
-  for (const s of steps) {
-    const step = substitutionStepDef(s).images(s, values, m);
+  steps.forEach((s, k) => {
+    const def = substitutionStepDef(s);
+    const bad = def.rangeError(s, values, m);
+    if (bad) throw new AppError('invalid_claim', bad.message, { path: `compare.relation.substitution[${k}]${bad.field ? `.${bad.field}` : ''}` });
+    const step = def.images(s, values, m);
     sigma = sigma.map((x) => step[x - 1]!);
-  }
+  });
   return sigma;
 }
 

@@ -6,9 +6,9 @@ import type { CheckContext } from '../compile-context.js';
 export type Counting = 'puzzles' | 'value' | { readonly statistic: string };
 
 /** One measure type. Registered in `measure-registry.ts`. */
-export interface MeasureDef<M extends { type: string } = { type: string }> {
+export interface MeasureDef<M extends { type: string } = { type: string }, Z extends z.ZodType = z.ZodType<M>> {
   readonly type: M['type'];
-  readonly schema: z.ZodType<M> & z.core.$ZodTypeDiscriminable;
+  readonly schema: Z & z.core.$ZodTypeDiscriminable;
   check(measure: M, ctx: CheckContext): void;
   /** The measure is an integer on this piece set (a polynomial measure is `value` with non-integer weights). */
   integer(measure: M, pieces: PieceSet): boolean;
@@ -17,6 +17,6 @@ export interface MeasureDef<M extends { type: string } = { type: string }> {
   text(measure: M): string;
 }
 
-export function defineMeasure<M extends { type: string }>(def: MeasureDef<M>): MeasureDef<M> {
+export function defineMeasure<Z extends z.ZodType<{ type: string }> & z.core.$ZodTypeDiscriminable>(def: MeasureDef<z.output<Z>, Z>): MeasureDef<z.output<Z>, Z> {
   return def;
 }

@@ -4,9 +4,9 @@ import type { Value } from '../measure.js';
 import type { Permutation } from '../substitution.js';
 
 /** One relation type between left = measure(b) and right = measure(T(b)). Registered in `relation-registry.ts`. */
-export interface RelationDef<R extends { type: string } = { type: string }> {
+export interface RelationDef<R extends { type: string } = { type: string }, Z extends z.ZodType = z.ZodType<R>> {
   readonly type: R['type'];
-  readonly schema: z.ZodType<R> & z.core.$ZodTypeDiscriminable;
+  readonly schema: Z & z.core.$ZodTypeDiscriminable;
   /** Meaning checks: the measure kind it needs, indices in range. */
   check(relation: R, ctx: CheckContext): void;
   /** left R right ⇔ right R left, so an involutive transform may check each pair {b, T(b)} once. */
@@ -25,6 +25,6 @@ export interface RelationDef<R extends { type: string } = { type: string }> {
   readonly failure: string;
 }
 
-export function defineRelation<R extends { type: string }>(def: RelationDef<R>): RelationDef<R> {
+export function defineRelation<Z extends z.ZodType<{ type: string }> & z.core.$ZodTypeDiscriminable>(def: RelationDef<z.output<Z>, Z>): RelationDef<z.output<Z>, Z> {
   return def;
 }

@@ -11,9 +11,9 @@ export interface Boundary {
 }
 
 /** One transform step type: its schema, static check, action and metadata. Registered in `step-registry.ts`. */
-export interface TransformStepDef<S extends { type: string } = { type: string }> {
+export interface TransformStepDef<S extends { type: string } = { type: string }, Z extends z.ZodType = z.ZodType<S>> {
   readonly type: S['type'];
-  readonly schema: z.ZodType<S> & z.core.$ZodTypeDiscriminable;
+  readonly schema: Z & z.core.$ZodTypeDiscriminable;
   /** Meaning checks beyond the schema, against the side lengths before this step. */
   check(step: S, ctx: CheckContext): void;
   /** The action as a relabelling of sides, or undefined when the step is not one (completion). */
@@ -31,6 +31,6 @@ export interface TransformStepDef<S extends { type: string } = { type: string }>
 }
 
 /** Declares a step type with its types inferred from the schema. */
-export function defineStep<S extends { type: string }>(def: TransformStepDef<S>): TransformStepDef<S> {
+export function defineStep<Z extends z.ZodType<{ type: string }> & z.core.$ZodTypeDiscriminable>(def: TransformStepDef<z.output<Z>, Z>): TransformStepDef<z.output<Z>, Z> {
   return def;
 }

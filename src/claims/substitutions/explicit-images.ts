@@ -16,6 +16,7 @@ export const explicitImages = defineSubstitutionStep({
     if (bad) ctx.fail(`Images: expected at most N = ${n(bad)} entries, received ${s.images.length} at ${valuesText(bad)}`, `${ctx.path}.images`, 'N = s6+s1+s2 of the larger completed triangle');
   },
   images: (s, _values, m) => Array.from({ length: m }, (_, k) => s.images[k] ?? k + 1),
+  rangeError: (s, _values, m) => (s.images.length <= m ? undefined : { message: `Images: expected at most ${m} entries, received ${s.images.length}`, field: 'images' }),
   variables: () => [],
   text: (s) => `[${s.images.join(',')}]`,
 });

@@ -15,6 +15,10 @@ export const reverseBlock = defineSubstitutionStep({
     const [from, to] = [at(s.from, values), at(s.to, values)];
     return Array.from({ length: m }, (_, k) => (k + 1 >= from && k + 1 <= to ? from + to - k - 1 : k + 1));
   },
+  rangeError(s, values, m) {
+    const [from, to] = [at(s.from, values), at(s.to, values)];
+    return 1 <= from && from <= to && to <= m ? undefined : { message: `Substitution block: expected 1 ≤ from ≤ to ≤ ${m}, received from = ${from}, to = ${to}` };
+  },
   variables: (s) => [...new Set([...expressionVariables(s.from), ...expressionVariables(s.to)])],
   text: (s) => `rev[${s.from}..${s.to}]`,
 });

@@ -22,6 +22,10 @@ export const shiftBlock = defineSubstitutionStep({
     const len = to - from + 1;
     return Array.from({ length: m }, (_, k) => (k + 1 >= from && k + 1 <= to ? from + ((((k + 1 - from + by) % len) + len) % len) : k + 1));
   },
+  rangeError(s, values, m) {
+    const [from, to] = [at(s.from, values), at(s.to, values)];
+    return 1 <= from && from <= to && to <= m ? undefined : { message: `Substitution block: expected 1 ≤ from ≤ to ≤ ${m}, received from = ${from}, to = ${to}` };
+  },
   variables: (s) => [...new Set([s.from, s.to, s.by].flatMap(expressionVariables))],
   text: (s) => `shift[${s.from}..${s.to}] by ${s.by}`,
 });
