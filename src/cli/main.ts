@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 import yargs from 'yargs';
 import { hideBin } from 'yargs/helpers';
+import { joinDashValues } from './dash-values.js';
 import { countCommand } from './commands/count-command.js';
 import { crosscheckCommand } from './commands/crosscheck-command.js';
 import { showCommand } from './commands/show-command.js';
@@ -17,7 +18,7 @@ import { clusterScriptCommand } from './commands/cluster-script-command.js';
 import { expandCommand } from './commands/expand-command.js';
 import { tableCommand } from './commands/table-command.js';
 
-await yargs(hideBin(process.argv))
+await yargs(joinDashValues(hideBin(process.argv)))
   .scriptName('puzzlesweep')
   .command(countCommand)
   .command(expandCommand)

@@ -8,7 +8,7 @@ import { puzzleWeightText } from './puzzle-weight.js';
 export interface SvgOptions {
   /** Pixels per unit edge (default 52). */
   readonly unit?: number;
-  /** Width the rows wrap at, in pixels (default 1080); ignored when `columns` is given. */
+  /** Width the rows wrap at, in pixels (default 1080; wider when that keeps the sheet square); ignored when `columns` is given. */
   readonly maxWidth?: number;
   readonly columns?: number;
   /** Line written above the puzzles (e.g. the boundary). */
@@ -120,7 +120,9 @@ export function drawPuzzlesSvg(puzzles: readonly Puzzle[], options: SvgOptions =
   const cells = puzzles.map((p, k) => puzzleGroupSvg(p, k + 1, unit));
   const cw = Math.max(1, ...cells.map((c) => c.width));
   const ch = Math.max(1, ...cells.map((c) => c.height));
-  const columns = Math.max(1, options.columns ?? Math.floor((options.maxWidth ?? 1080) / cw));
+  // Wide puzzles still go in a grid: at least as many columns as make the sheet roughly square.
+  const square = Math.ceil(Math.sqrt((cells.length * ch) / cw));
+  const columns = Math.max(1, options.columns ?? Math.max(Math.floor((options.maxWidth ?? 1080) / cw), square));
   const cols = Math.min(columns, Math.max(1, cells.length));
   const head = (options.title ? 26 : 0) + 22;
   const rows = Math.ceil(cells.length / cols);

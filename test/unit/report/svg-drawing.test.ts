@@ -88,3 +88,15 @@ describe('parseXml (the checker the tests above rely on)', () => {
     expect(parseXml('<?xml version="1.0"?>\n<a k="v"><b>t &amp; u</b></a>\n').map((e) => e.name)).toEqual(['a', 'b']);
   });
 });
+
+describe('drawPuzzlesSvg grid', () => {
+  it('lays wide puzzles out in a grid, not one tall column', () => {
+    // c_{21,21}^{321} has two puzzles [value from memory]; at 600 px per edge each is wider than a sheet line.
+    const ps = [...enumeratePuzzles(makeRegion([6, 0, 6, 0, 6, 0]), ['010101', '', '010101', '', '010101', ''], theoryPieceSet('cohomology'))];
+    const many = [...ps, ...ps, ...ps, ...ps];
+    const svg = drawPuzzlesSvg(many, { unit: 600 });
+    const xs = new Set([...svg.matchAll(/data-puzzle="\d+" transform="translate\(([\d.]+),/g)].map((m) => m[1]));
+    // 8 triangles in about a square sheet: 3 columns (⌈√(8·height/width)⌉, the layout rule itself).
+    expect(xs.size).toBeGreaterThanOrEqual(2);
+  });
+});

@@ -41,6 +41,18 @@ describe('drawPuzzlesTikz', () => {
     expect(tex).toMatch(/\$y_\{\d+\} - y_\{\d+\}\$/);
   });
 
+  it('is a standalone picture, or with pictureOnly only definitions and pictures for \\input; colours named by piece kind', () => {
+    const doc = drawPuzzlesTikz(triangle);
+    expect(doc).toMatch(/^\\documentclass\[[^\]]*\]\{standalone\}/);
+    const part = drawPuzzlesTikz(triangle, { pictureOnly: true });
+    expect(part).not.toMatch(/\\documentclass|\\begin\{document\}/);
+    expect(environments(part).filter((e) => e === 'tikzpicture').length).toBe(triangle.length);
+    // Every colour a picture uses is defined in the same file, and the rhombus colour says what it fills.
+    const defined = new Set([...part.matchAll(/\\definecolor\{([A-Za-z]+)\}/g)].map((m) => m[1]));
+    expect(defined.has('pieceRhombus')).toBe(true);
+    for (const m of part.matchAll(/\\fill\[([A-Za-z]+)\]/g)) expect(defined.has(m[1]!)).toBe(true);
+  });
+
   it('escapes LaTeX specials in plain text', () => {
     // The escapes are the standard LaTeX spellings (Lamport, LaTeX: A Document Preparation System, 1994).
     expect(texText('a_b & 50% #1 {x}')).toBe('a\\_b \\& 50\\% \\#1 \\{x\\}');
