@@ -18,7 +18,8 @@ function claimText(c: ClaimSummary): string[] {
     const perms = k.commonPermutations
       ? `  one permutation for all: ${k.commonPermutations.common.length ? k.commonPermutations.common.slice(0, 3).map((p) => `[${p.join(',')}]`).join(' ') : 'none'}${k.commonPermutations.lowerBound ? ' (lists truncated)' : ''}`
       : '';
-    lines.push(`    ${k.key.padEnd(16)} sides ${k.lengths.join(',').padEnd(14)} ${k.instances.padStart(9)} instances  ${state}${k.checked ? `  (${k.checked} checked now, ${k.fails} fail)` : ''}${perms}`);
+    const progress = k.state === 'incomplete' ? ` (${k.done} of ${k.instances} done)` : '';
+    lines.push(`    ${k.key.padEnd(16)} sides ${k.lengths.join(',').padEnd(14)} ${k.instances.padStart(9)} instances  ${state}${progress}${k.checked ? `  (${k.checked} checked now, ${k.fails} fail)` : ''}${perms}`);
   }
   if (c.permutations) {
     lines.push(
@@ -26,6 +27,15 @@ function claimText(c: ClaimSummary): string[] {
     );
   }
   if (c.counterexamples) lines.push(`  ${c.counterexamples} counterexamples stored`);
+  if (c.outcome === 'empty') lines.push('  the family has no instance within its bounds: nothing was checked, so nothing is shown to hold');
+  if (c.remaining) {
+    const r = c.remaining;
+    const what = [
+      r.classes.length ? `${r.instances} instances in ${r.classes.length} class${r.classes.length === 1 ? '' : 'es'} (${r.classes.slice(0, 4).join('; ')}${r.classes.length > 4 ? '; …' : ''})` : '',
+      r.rechecks ? `${r.rechecks} stored counterexamples to re-check` : '',
+    ].filter(Boolean);
+    if (what.length) lines.push(`  unfinished: ${what.join(', ')}; run the same command again to finish${c.stopReason === 'time_limit' ? ' (with a larger --time-limit, or none)' : ''}`);
+  }
   const f = c.firstCounterexample;
   if (f) {
     lines.push(
@@ -44,7 +54,11 @@ export function sweepSummaryText(s: SweepSummary): string {
     ? 'interrupted: finished chunks are stored; run the same command again to resume'
     : s.exitCode === 1
       ? 'a counterexample is known'
-      : 'holds on everything swept';
+      : s.exitCode === 4
+        ? s.claims.some((c) => c.outcome === 'incomplete')
+          ? 'incomplete: part of the requested classes is unchecked (see "unfinished" above); nothing is claimed to hold'
+          : 'nothing to check: the family is empty within its bounds'
+        : 'holds on every requested class';
   return [...s.claims.flatMap(claimText), `store: ${s.db}`, `result: ${verdict} (${seconds(s.elapsedMs)})`].join('\n');
 }
 

@@ -1,5 +1,5 @@
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
-import { classCommonPermutations, listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store } from '../store/index.js';
+import { classCommonPermutations, doneInstances, listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store, type SweepMethod } from '../store/index.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 import type { RecheckOutcome } from './recheck-counterexamples.js';
 import { replayCommand, type ClaimSummary, type ClassSummary } from './sweep-summary.js';
@@ -25,7 +25,18 @@ export interface SummaryInput {
   readonly stopReason: StopReason;
   readonly tally: RunTally;
   readonly rechecked: RecheckOutcome;
-  readonly classes: readonly { readonly cls: SizeClass; readonly count: bigint; readonly checked: number; readonly holds: number; readonly fails: number }[];
+  readonly classes: readonly {
+    readonly cls: SizeClass;
+    readonly count: bigint;
+    readonly checked: number;
+    readonly holds: number;
+    readonly fails: number;
+    /** The scheduler's last word on the class: settled `verified`/`counterexample`, or anything else (unfinished). */
+    readonly phase: string;
+  }[];
+  /** Every requested class was settled (and every stored counterexample re-checked). */
+  readonly complete: boolean;
+  readonly method: SweepMethod;
   readonly began: number;
   readonly dbArg?: string | undefined;
 }
@@ -37,9 +48,17 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
   const verified = new Map<string, { method: 'exact' | 'modular'; errorBound: number }>();
   // An exact verification outranks a modular one of the same class.
   for (const v of listVerified(i.db, i.claim.fingerprint)) if (!verified.has(v.classKey) || v.method === 'exact') verified.set(v.classKey, v);
+  let remainingInstances = 0n;
+  const unsettled: string[] = [];
   const classes: ClassSummary[] = i.classes.map((s) => {
-    const v = verified.get(s.cls.key);
+    const settled = s.phase === 'verified' || s.phase === 'counterexample' || s.phase === 'part-done';
+    const v = s.phase === 'verified' || s.phase === 'counterexample' ? verified.get(s.cls.key) : undefined;
     const perms = classCommonPermutations(i.db, i.claim.fingerprint, s.cls.key);
+    const done = v ? s.count : doneInstances(i.db, i.claim.fingerprint, s.cls.key, i.method);
+    if (!settled && !failing.has(s.cls.key)) {
+      unsettled.push(s.cls.key);
+      remainingInstances += s.count - done;
+    }
     return {
       key: s.cls.key,
       size: s.cls.size,
@@ -48,12 +67,15 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
       checked: s.checked,
       holds: s.holds,
       fails: s.fails,
+      done: done.toString(),
       state: failing.has(s.cls.key) ? 'counterexample' : v ? 'verified' : 'incomplete',
       ...(v && !failing.has(s.cls.key) ? { method: v.method, errorBound: v.errorBound } : {}),
       ...(perms ? { commonPermutations: perms } : {}),
     };
   });
   const first = counterexamples[0];
+  const outcome: ClaimSummary['outcome'] =
+    counterexamples.length > 0 ? 'counterexample' : i.classes.every((c) => c.count === 0n) ? 'empty' : unsettled.length > 0 || !i.complete ? 'incomplete' : 'holds';
   const perms = permutationSummary(i.db, i.claim.fingerprint);
   return {
     claimId: i.claim.id,
@@ -72,6 +94,10 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
     rechecked: i.rechecked,
     method: i.tally.exact ? 'exact' : 'modular',
     errorBound: Math.min(1, i.tally.errorBound),
+    outcome,
+    ...(unsettled.length > 0 || (!i.complete && outcome !== 'counterexample')
+      ? { remaining: { classes: unsettled, instances: remainingInstances.toString(), rechecks: i.rechecked.pending } }
+      : {}),
     classes,
     ...(first
       ? {

@@ -1,6 +1,6 @@
 import type { SizeClass } from '../claims/claim-api.js';
-import { toAppError } from '../errors.js';
-import { listCounterexamples, recordRecheck, type Store } from '../store/index.js';
+import { AppError } from '../errors.js';
+import { counterexampleKeys, recordRecheck, type Store } from '../store/index.js';
 import { deserializeError } from './serialize-error.js';
 import type { WorkerPool } from './worker-pool.js';
 import type { ConfirmTask } from './worker-task.js';
@@ -10,11 +10,17 @@ export interface RecheckOutcome {
   readonly checked: number;
   readonly stillFail: number;
   readonly nowHold: number;
+  /** Counterexamples left unchecked because the run was stopped first (they are re-checked next time). */
+  readonly pending: number;
 }
 
+// Indices per worker task: small enough that a stop is noticed quickly.
+const BATCH = 64;
+
 /**
- * Recomputes every stored counterexample of the claim exactly (those whose class lies inside this run's
- * bounds) and records the outcome; a "now holds" means the stored result can no longer be trusted.
+ * Recomputes exactly, once, each stored counterexample that was never re-checked (those whose class lies
+ * inside this run's bounds), and records the outcome; a "now holds" means the stored result was doubtful.
+ * Batches run on the pool in parallel; `stopped` is asked between batches, so a stop is honoured at once.
  */
 export async function recheckCounterexamples(
   db: Store,
@@ -22,28 +28,41 @@ export async function recheckCounterexamples(
   base: Omit<ConfirmTask, 'kind' | 'classKey' | 'indices' | 'attempt'>,
   classes: readonly SizeClass[],
   runId: number,
+  stopped: () => boolean,
 ): Promise<RecheckOutcome> {
   const keys = new Set(classes.map((c) => c.key));
-  const byClass = new Map<string, bigint[]>();
-  for (const c of listCounterexamples(db, base.fingerprint)) {
-    if (!keys.has(c.classKey)) continue;
-    const list = byClass.get(c.classKey);
-    if (list) list.push(c.index);
-    else byClass.set(c.classKey, [c.index]);
+  const batches: { classKey: string; indices: bigint[] }[] = [];
+  const open = new Map<string, bigint[]>();
+  for (const c of counterexampleKeys(db, base.fingerprint)) {
+    if (!keys.has(c.classKey) || c.recheck !== null) continue;
+    let list = open.get(c.classKey);
+    if (!list || list.length >= BATCH) {
+      list = [];
+      open.set(c.classKey, list);
+      batches.push({ classKey: c.classKey, indices: list });
+    }
+    list.push(c.index);
   }
   let checked = 0;
   let stillFail = 0;
-  await Promise.all(
-    [...byClass].map(async ([classKey, indices]) => {
-      const reply = await pool.run({ ...base, kind: 'confirm', classKey, indices, attempt: 0 }, `re-check of class ${classKey}`);
-      if (!reply.ok) throw deserializeError(reply.error, `re-check of class ${classKey}`);
-      if (!('confirmed' in reply)) throw toAppError(new Error('re-check reply without results'));
-      for (const r of reply.confirmed) {
-        recordRecheck(db, base.fingerprint, classKey, r.index, runId, r.status);
-        checked++;
-        if (r.status === 'fails') stillFail++;
-      }
-    }),
-  );
-  return { checked, stillFail, nowHold: checked - stillFail };
+  let next = 0;
+  const lane = async () => {
+    while (next < batches.length && !stopped()) {
+      const { classKey, indices } = batches[next++]!;
+      const what = `re-check of class ${classKey}`;
+      const reply = await pool.run({ ...base, kind: 'confirm', classKey, indices, attempt: 0 }, what);
+      if (!reply.ok) throw deserializeError(reply.error, what);
+      if (!('confirmed' in reply)) throw new AppError('internal_error', `Re-check: expected confirmed results, received another reply (${what})`);
+      db.transaction(() => {
+        for (const r of reply.confirmed) {
+          recordRecheck(db, base.fingerprint, classKey, r.index, runId, r.status);
+          checked++;
+          if (r.status === 'fails') stillFail++;
+        }
+      })();
+    }
+  };
+  await Promise.all(Array.from({ length: Math.max(1, pool.size * 2) }, lane));
+  const total = batches.reduce((a, b) => a + b.indices.length, 0);
+  return { checked, stillFail, nowHold: checked - stillFail, pending: total - checked };
 }

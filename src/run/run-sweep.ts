@@ -19,6 +19,14 @@ export interface SweepInput {
   readonly runtimeModule?: string | undefined;
 }
 
+/** 130 interrupted, 1 a counterexample is known, 4 anything requested left unfinished (or nothing to check), else 0. */
+export function sweepExitCode(claims: readonly ClaimSummary[], interrupted: boolean): 0 | 1 | 4 | 130 {
+  if (interrupted) return 130;
+  if (claims.some((c) => c.outcome === 'counterexample')) return 1;
+  if (claims.some((c) => c.outcome !== 'holds')) return 4;
+  return 0;
+}
+
 /** Sweeps each claim in turn on one worker pool and one store; returns data, prints nothing. */
 export async function runSweep(input: SweepInput): Promise<SweepSummary> {
   const began = Date.now();
@@ -51,8 +59,6 @@ export async function runSweep(input: SweepInput): Promise<SweepSummary> {
     db.close();
   }
   const interrupted = claims.some((c) => c.status === 'interrupted') || (input.signal?.aborted ?? false);
-  // A shard that stopped before its work was done (e.g. --time-limit) must not look like a finished one to a job scheduler.
-  const unfinishedShard = options.shard !== undefined && claims.some((c) => c.stopReason !== 'finished');
-  const exitCode = interrupted ? 130 : unfinishedShard ? UNFINISHED_SHARD_EXIT : claims.some((c) => c.counterexamples > 0) ? 1 : 0;
+  const exitCode = sweepExitCode(claims, interrupted);
   return { db: options.db, claims, interrupted, elapsedMs: Date.now() - began, workerCrashes, exitCode };
 }

@@ -1,13 +1,11 @@
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
 import { AppError, toAppError } from '../errors.js';
 import {
-  classCoverage,
+  ChunkLeaser,
   completeChunk,
+  counterexampleKeys,
   doneInstances,
   finishRun,
-  leaseChunk,
-  listCounterexamples,
-  markVerified,
   reapDeadRuns,
   releaseChunk,
   saveClaim,
@@ -15,16 +13,18 @@ import {
   touchRun,
   type LeasedChunk,
   type Store,
-  type StopReason,
   type SweepMethod,
 } from '../store/index.js';
 import { buildClaimSummary, type RunTally } from './build-claim-summary.js';
+import { autoSizing } from './chunk-sizing.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 import { recheckCounterexamples } from './recheck-counterexamples.js';
 import type { RunOptions } from './run-options.js';
 import { shardPlan } from './shard-plan.js';
 import { deserializeError } from './serialize-error.js';
+import { settleClass } from './settle-class.js';
 import type { ClaimSummary } from './sweep-summary.js';
+import { createScheduler, type SweepScheduler } from './sweep-scheduler.js';
 import type { WorkerPool } from './worker-pool.js';
 import type { ChunkTask } from './worker-task.js';
 
@@ -50,21 +50,16 @@ export interface SweepContext {
   readonly dbArg?: string | undefined;
 }
 
-interface ClassState {
-  readonly cls: SizeClass;
-  readonly count: bigint;
-  /** Work of this run in the class: [first, limit) (the whole class unless --shard narrows it). */
-  readonly first: bigint;
-  readonly limit: bigint;
-  cursor: bigint;
-  exhausted: boolean;
-  outstanding: number;
-  checked: number;
-  holds: number;
-  fails: number;
-}
+const HEARTBEAT_MS = 5_000;
+// A class that reopens this often without a single new lease has a coverage the leaser cannot see: a bug.
+const MAX_IDLE_REOPENS = 3;
 
-/** Sweeps one claim: re-check stored counterexamples, lease and run chunks in class order, store each as it ends. */
+const sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, Math.max(0, ms)).unref());
+
+/**
+ * Sweeps one claim: re-check stored counterexamples never re-checked, then let the scheduler hand out
+ * chunks in class order while this (main) thread only leases, stores results and settles classes.
+ */
 export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: ClaimPlan): Promise<ClaimSummary> {
   const began = Date.now();
   const { db, options } = ctx;
@@ -73,128 +68,139 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   reapDeadRuns(db);
   const sharded = shardPlan(plan, options);
   const runId = startRun(db, claim.fingerprint, { ...options, file: claim.file ?? null, ...(sharded ? { shard: sharded.record } : {}) });
-  const heartbeat = setInterval(() => touchRun(db, runId), 5_000);
+  const heartbeat = setInterval(() => touchRun(db, runId), HEARTBEAT_MS);
   heartbeat.unref();
   const base = { runtimeModule: ctx.runtimeModule, canonicalJson: claim.canonicalJson, fingerprint: claim.fingerprint, exact: options.exact, max: options.max };
-  const states: ClassState[] = (sharded?.classes ?? plan.classes(options.max).map((cls) => ({ cls, first: 0n, limit: plan.instanceCount(cls) }))).map(({ cls, first, limit }) => ({
-    cls,
-    count: plan.instanceCount(cls),
-    first,
-    limit,
-    cursor: first,
-    exhausted: false,
-    outstanding: 0,
-    checked: 0,
-    holds: 0,
-    fails: 0,
-  }));
+  // Each class with the part of it this run sweeps: [first, limit), the whole class unless --shard narrows it.
+  const parts = sharded?.classes ?? plan.classes(options.max).map((cls) => ({ cls, first: 0n, limit: plan.instanceCount(cls) }));
+  const classes: SizeClass[] = parts.map((p) => p.cls);
+  const counts = classes.map((c) => plan.instanceCount(c));
   const tally: RunTally = { checked: 0, holds: 0, skippedZero: 0, paired: 0, overturned: 0, added: 0, errorBound: 0, exact: true };
-  let fatal: AppError | undefined;
-  let stop: StopReason | undefined;
+  let longestChunkMs = 0;
+  // Stop early enough that the chunks still running are likely to end before the deadline.
+  const stopCause = () => (ctx.signal?.aborted ? 'signal' : ctx.deadline !== undefined && Date.now() + longestChunkMs >= ctx.deadline ? 'time_limit' : undefined);
+  const inflight = new Set<Promise<void>>();
+  let sched: SweepScheduler | undefined;
   try {
-    const rechecked = await recheckCounterexamples(db, ctx.pool, base, states.map((s) => s.cls), runId);
-    const standing = listCounterexamples(db, claim.fingerprint).filter((c) => c.recheck !== 'holds');
-    const failing = new Set(standing.map((c) => c.classKey));
-    let known = standing.length;
-    let firstFail = states.findIndex((s) => failing.has(s.cls.key));
-    if (firstFail < 0) firstFail = Infinity;
-    const total = states.reduce((acc, s) => acc + Math.max(0, Number(s.limit - s.first - doneInstances(db, claim.fingerprint, s.cls.key, method))), 0);
-    const progress = () => ctx.onProgress?.({ claimId: claim.id, checked: tally.checked, total, counterexamples: known });
+    const rechecked = await recheckCounterexamples(db, ctx.pool, base, classes, runId, () => stopCause() !== undefined);
+    const standing = counterexampleKeys(db, claim.fingerprint).filter((c) => c.recheck !== 'holds');
+    const s = createScheduler({
+      classes: parts.map((p) => ({ key: p.cls.key, count: p.limit, first: p.first })),
+      capacity: options.workers * 2,
+      stopAtFirst: options.stopAtFirst,
+      maxCounterexamples: options.maxCounterexamples,
+      sizing: autoSizing(options.workers, options.chunkSize),
+      failingClasses: new Set(standing.map((c) => c.classKey)),
+      knownCounterexamples: standing.length,
+    });
+    sched = s;
+    const total = parts.reduce((acc, p) => acc + Math.max(0, Number(p.limit - p.first - doneInstances(db, claim.fingerprint, p.cls.key, method))), 0);
+    const progress = () => ctx.onProgress?.({ claimId: claim.id, checked: tally.checked, total, counterexamples: s.counterexamples });
     progress();
 
-    const verifyIfDone = (s: ClassState) => {
-      if (!s.exhausted || s.outstanding > 0 || stop === 'signal' || fatal) return;
-      const cov = classCoverage(db, claim.fingerprint, s.cls.key, method, s.count);
-      const failed = listCounterexamples(db, claim.fingerprint).some((c) => c.classKey === s.cls.key);
-      if (cov.complete && !failed) {
-        markVerified(db, claim.fingerprint, runId, { classKey: s.cls.key, method: cov.method, size: s.cls.size, lengths: s.cls.lengths, variables: s.cls.variables, instances: s.count, errorBound: cov.errorBound });
+    const leasers = new Map<number, ChunkLeaser>();
+    const leaser = (ci: number) => {
+      let l = leasers.get(ci);
+      if (!l) {
+        l = new ChunkLeaser(db, { fingerprint: claim.fingerprint, classKey: classes[ci]!.key, method, runId, count: parts[ci]!.limit });
+        leasers.set(ci, l);
       }
+      return l;
     };
-    let longestChunkMs = 0;
-    const checkStops = () => {
-      if (stop || fatal) return;
-      if (ctx.signal?.aborted) stop = 'signal';
-      // Stop early enough that the chunks still running are likely to end before the deadline.
-      else if (ctx.deadline !== undefined && Date.now() + longestChunkMs >= ctx.deadline) stop = 'time_limit';
-      else if (options.maxCounterexamples !== undefined && known >= options.maxCounterexamples) stop = 'max_counterexamples';
-    };
+    const idleReopens = new Map<number, number>();
+    let fatal: AppError | undefined;
 
-    let ci = 0;
-    const nextLease = (): { s: ClassState; lease: LeasedChunk } | undefined => {
-      while (ci < states.length) {
-        if (options.stopAtFirst && ci > firstFail) {
-          stop = 'stop_at_first';
-          return undefined;
-        }
-        const s = states[ci]!;
-        const lease = leaseChunk(db, { fingerprint: claim.fingerprint, classKey: s.cls.key, method, runId, from: s.cursor, count: s.limit, size: BigInt(options.chunkSize) });
-        if (lease) {
-          s.cursor = lease.end;
-          return { s, lease };
-        }
-        s.exhausted = true;
-        verifyIfDone(s);
-        ci++;
-      }
-      return undefined;
-    };
-
-    const dispatch = async (s: ClassState, lease: LeasedChunk): Promise<void> => {
-      const task: ChunkTask = { ...base, kind: 'chunk', classKey: s.cls.key, start: lease.start, end: lease.end, attempt: 0 };
-      const what = `chunk ${s.cls.key}:${lease.start}-${lease.end}`;
+    const dispatch = async (ci: number, lease: LeasedChunk): Promise<void> => {
+      const classKey = classes[ci]!.key;
+      const task: ChunkTask = { ...base, kind: 'chunk', classKey, start: lease.start, end: lease.end, attempt: 0 };
+      const what = `chunk ${classKey}:${lease.start}-${lease.end}`;
       const startedAt = Date.now();
       try {
         const reply = await ctx.pool.run(task, what);
         longestChunkMs = Math.max(longestChunkMs, Date.now() - startedAt);
         if (!reply.ok) throw deserializeError(reply.error, what);
-        if (!('chunk' in reply)) throw new Error(`${what}: reply without results`);
+        if (!('chunk' in reply)) throw new AppError('internal_error', `Worker reply: expected chunk results, received another reply (${what})`);
         const r = reply.chunk;
-        const added = completeChunk(db, { chunkId: lease.chunkId, runId, fingerprint: claim.fingerprint, classKey: s.cls.key, ...r });
-        if (added < 0) return;
-        Object.assign(tally, {
-          checked: tally.checked + r.checked,
-          holds: tally.holds + r.holds,
-          skippedZero: tally.skippedZero + r.skippedZero,
-          paired: tally.paired + r.paired,
-          overturned: tally.overturned + r.overturned,
-          added: tally.added + added,
-          errorBound: tally.errorBound + r.errorBound,
-          exact: tally.exact && r.exact,
-        });
-        s.checked += r.checked;
-        s.holds += r.holds;
-        s.fails += r.fails;
-        known += added;
-        if (r.fails > 0) firstFail = Math.min(firstFail, states.indexOf(s));
+        const added = completeChunk(db, { chunkId: lease.chunkId, runId, fingerprint: claim.fingerprint, classKey, ...r });
+        if (added < 0) {
+          // Our lease was freed by another process meanwhile: nothing was stored, and settling the class re-leases it.
+          s.completed(ci, { checked: 0, holds: 0, fails: 0, added: 0, durationMs: 0 });
+          return;
+        }
+        tally.checked += r.checked;
+        tally.holds += r.holds;
+        tally.skippedZero += r.skippedZero;
+        tally.paired += r.paired;
+        tally.overturned += r.overturned;
+        tally.added += added;
+        tally.errorBound += r.errorBound;
+        tally.exact &&= r.exact;
+        s.completed(ci, { checked: r.checked, holds: r.holds, fails: r.fails, added, durationMs: r.durationMs });
         progress();
       } catch (e) {
         releaseChunk(db, lease.chunkId);
+        s.abandoned(ci);
         fatal ??= toAppError(e);
-      } finally {
-        s.outstanding--;
-        verifyIfDone(s);
       }
     };
 
-    const inflight = new Set<Promise<void>>();
-    const capacity = options.workers * 2;
     for (;;) {
-      checkStops();
-      while (!stop && !fatal && inflight.size < capacity) {
-        const next = nextLease();
-        if (!next) break;
-        next.s.outstanding++;
-        const p: Promise<void> = dispatch(next.s, next.lease).finally(() => inflight.delete(p));
-        inflight.add(p);
+      const cause = stopCause();
+      if (cause) s.halt(cause);
+      let action = s.next(Date.now());
+      while (action.kind === 'lease' || action.kind === 'settle') {
+        const ci = action.classIndex;
+        if (action.kind === 'lease') {
+          const lease = leaser(ci).lease(action.from, action.size);
+          s.leased(ci, lease);
+          if (lease) {
+            idleReopens.delete(ci);
+            const p: Promise<void> = dispatch(ci, lease).finally(() => inflight.delete(p));
+            inflight.add(p);
+          }
+        } else {
+          const outcome = settleClass({ db, fingerprint: claim.fingerprint, runId, method, cls: classes[ci]!, count: counts[ci]!, part: parts[ci]! });
+          if (outcome === 'reopen') {
+            const n = (idleReopens.get(ci) ?? 0) + 1;
+            if (n > MAX_IDLE_REOPENS) throw new AppError('internal_error', `Class ${classes[ci]!.key}: expected its unfinished part to be free or leased, received neither`);
+            idleReopens.set(ci, n);
+            leaser(ci).reload();
+          }
+          s.settled(ci, outcome, Date.now());
+        }
+        action = s.next(Date.now());
       }
-      if (inflight.size === 0) break;
-      await Promise.race(inflight);
+      if (action.kind === 'finished') break;
+      const wakeups: Promise<unknown>[] = [...inflight];
+      if (action.until !== undefined) wakeups.push(sleep(action.until - Date.now()));
+      if (ctx.signal && !ctx.signal.aborted) wakeups.push(new Promise((resolve) => ctx.signal!.addEventListener('abort', resolve, { once: true })));
+      await Promise.race(wakeups);
     }
     if (fatal) throw fatal;
-    const status = stop === 'signal' ? 'interrupted' : 'completed';
-    finishRun(db, runId, status, stop ?? 'finished');
-    return buildClaimSummary({ db, claim, plan, runId, status, stopReason: stop ?? 'finished', tally, rechecked, classes: states, began, dbArg: ctx.dbArg });
+    const stopReason = s.stopReason ?? 'finished';
+    const status = stopReason === 'signal' ? 'interrupted' : 'completed';
+    finishRun(db, runId, status, stopReason);
+    return buildClaimSummary({
+      db,
+      claim,
+      plan,
+      runId,
+      status,
+      stopReason,
+      tally,
+      rechecked,
+      classes: classes.map((cls, i) => {
+        const c = s.classes[i]!;
+        return { cls, count: counts[i]!, checked: c.checked, holds: c.holds, fails: c.fails, phase: c.phase };
+      }),
+      complete: s.complete && rechecked.pending === 0,
+      method,
+      began,
+      dbArg: ctx.dbArg,
+    });
   } catch (e) {
+    sched?.halt('error');
+    await Promise.allSettled([...inflight]);
     const err = toAppError(e);
     finishRun(db, runId, 'failed', 'error', { code: err.code, message: err.message });
     throw err;

@@ -8,6 +8,8 @@ export interface ClassSummary {
   readonly lengths: readonly number[];
   /** Instances in the class (decimal string: counts may exceed 2^53). */
   readonly instances: string;
+  /** Instances of the class covered by finished chunks (this run and earlier ones), decimal string. */
+  readonly done: string;
   readonly checked: number;
   readonly holds: number;
   readonly fails: number;
@@ -46,11 +48,18 @@ export interface ClaimSummary {
   readonly newCounterexamples: number;
   /** Confirmed counterexamples in the store for this claim after the run (old and new). */
   readonly counterexamples: number;
-  readonly rechecked: { readonly checked: number; readonly stillFail: number; readonly nowHold: number };
+  readonly rechecked: { readonly checked: number; readonly stillFail: number; readonly nowHold: number; readonly pending: number };
   /** `modular` when any comparison of this run used modular evaluation. */
   readonly method: SweepMethod;
   /** Union bound on a false "holds" over this run's modular comparisons. */
   readonly errorBound: number;
+  /**
+   * `holds`: every requested class verified; `counterexample`: one is known; `incomplete`: part of the requested
+   * classes is unfinished (time limit, signal, a peer's lease); `empty`: the family has no instance in its bounds.
+   */
+  readonly outcome: 'holds' | 'counterexample' | 'incomplete' | 'empty';
+  /** What is left when not every requested class is settled: class keys, unfinished instances, stored counterexamples not re-checked. */
+  readonly remaining?: { readonly classes: readonly string[]; readonly instances: string; readonly rechecks: number } | undefined;
   readonly classes: readonly ClassSummary[];
   readonly firstCounterexample?: FirstCounterexample | undefined;
   /** For "up to some permutation" claims: permutations found, and the single one if one serves all. */
@@ -66,7 +75,7 @@ export interface SweepSummary {
   readonly elapsedMs: number;
   /** Worker threads that died mid-task (each task retried, up to the bound). */
   readonly workerCrashes: number;
-  /** 0 holds on everything swept, 1 a counterexample is known, 4 a --shard run stopped unfinished, 130 interrupted. */
+  /** 0 every claim holds on every requested class (a --shard: on its part), 1 a counterexample is known, 4 incomplete (or empty), 130 interrupted. */
   readonly exitCode: 0 | 1 | 4 | 130;
 }
 

@@ -26,35 +26,105 @@ export interface LeaseRequest {
 }
 
 // Rows that make a range unavailable: finished work that counts for this method, and every live lease.
-const BLOCKING = `fingerprint = ? AND class_key = ? AND end_index > ?
-  AND (state = 'leased' OR method = 'exact' OR method = ?)`;
+const BLOCKING = `(state = 'leased' OR method = 'exact' OR method = ?)`;
+
+/**
+ * Leases chunks of one class without rescanning its chunk rows: the rows that block a range are read once,
+ * then each lease reads only the rows added since (by this or another process), in the same write
+ * transaction that inserts the lease, so two processes never lease overlapping work. Rows another process
+ * deletes (freed leases) are not seen until `reload`; the sweep reloads when it settles the class.
+ */
+export class ChunkLeaser {
+  // Blocking ranges sorted by start; those before `head` lie wholly below the last cursor.
+  private blocks: { start: bigint; end: bigint }[] = [];
+  private head = 0;
+  private lastSeen = 0;
+  private readonly newRows;
+  private readonly allRows;
+  private readonly maxId;
+  private readonly insert;
+
+  constructor(
+    private readonly db: Store,
+    private readonly req: Omit<LeaseRequest, 'from' | 'size'>,
+  ) {
+    // The unary + keeps SQLite on the rowid range (rows added since) rather than the class's index.
+    this.newRows = db
+      .prepare(`SELECT chunk_id, start_index, end_index FROM chunks WHERE chunk_id > ? AND +fingerprint = ? AND +class_key = ? AND ${BLOCKING}`)
+      .safeIntegers(true);
+    this.allRows = db
+      .prepare(`SELECT start_index, end_index FROM chunks WHERE fingerprint = ? AND class_key = ? AND ${BLOCKING} ORDER BY start_index`)
+      .safeIntegers(true);
+    this.maxId = db.prepare(`SELECT COALESCE(MAX(chunk_id), 0) AS m FROM chunks`);
+    this.insert = db.prepare(
+      `INSERT INTO chunks (fingerprint, class_key, method, start_index, end_index, state, run_id) VALUES (?, ?, ?, ?, ?, 'leased', ?)`,
+    );
+    this.reload();
+  }
+
+  /** Reads the class's blocking rows afresh (after leases were freed). */
+  reload(): void {
+    this.blocks = [];
+    this.head = 0;
+    this.db.transaction(() => {
+      const rows = this.allRows.all(this.req.fingerprint, this.req.classKey, this.req.method) as { start_index: bigint; end_index: bigint }[];
+      this.blocks = rows.map((r) => ({ start: r.start_index, end: r.end_index }));
+      this.lastSeen = (this.maxId.get() as { m: number }).m;
+    })();
+  }
+
+  private catchUp(): void {
+    const rows = this.newRows.all(this.lastSeen, this.req.fingerprint, this.req.classKey, this.req.method) as { chunk_id: bigint; start_index: bigint; end_index: bigint }[];
+    for (const r of rows) this.add(r.start_index, r.end_index);
+    this.lastSeen = (this.maxId.get() as { m: number }).m;
+  }
+
+  private add(start: bigint, end: bigint): void {
+    let lo = this.head;
+    let hi = this.blocks.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (this.blocks[mid]!.start <= start) lo = mid + 1;
+      else hi = mid;
+    }
+    this.blocks.splice(lo, 0, { start, end });
+  }
+
+  /** Leases the first free range at or after `from` (at most `size` long); undefined when the rest is done or leased. */
+  lease(from: bigint, size: bigint): LeasedChunk | undefined {
+    return this.db
+      .transaction((): LeasedChunk | undefined => {
+        this.catchUp();
+        let cursor = from;
+        while (this.head < this.blocks.length && this.blocks[this.head]!.start <= cursor) {
+          const b = this.blocks[this.head++]!;
+          if (b.end > cursor) cursor = b.end;
+        }
+        if (this.head > 4096) {
+          this.blocks = this.blocks.slice(this.head);
+          this.head = 0;
+        }
+        if (cursor >= this.req.count) return undefined;
+        let end = cursor + size;
+        const bound = this.head < this.blocks.length ? this.blocks[this.head]!.start : this.req.count;
+        if (end > bound) end = bound;
+        if (end > this.req.count) end = this.req.count;
+        const info = this.insert.run(this.req.fingerprint, this.req.classKey, this.req.method, cursor, end, this.req.runId);
+        this.lastSeen = Number(info.lastInsertRowid);
+        this.add(cursor, end);
+        return { chunkId: Number(info.lastInsertRowid), start: cursor, end };
+      })
+      .immediate();
+  }
+}
 
 /**
  * Leases the first free range at or after `from` (at most `size` long), in one write transaction so two
  * processes never lease overlapping work; undefined when the rest of the class is done or leased.
+ * Reads every blocking row of the class: a sweep keeps one `ChunkLeaser` per class instead.
  */
 export function leaseChunk(db: Store, req: LeaseRequest): LeasedChunk | undefined {
-  const rows = db.prepare(`SELECT start_index, end_index FROM chunks WHERE ${BLOCKING} ORDER BY start_index`).safeIntegers(true);
-  const insert = db.prepare(
-    `INSERT INTO chunks (fingerprint, class_key, method, start_index, end_index, state, run_id) VALUES (?, ?, ?, ?, ?, 'leased', ?)`,
-  );
-  return db
-    .transaction((): LeasedChunk | undefined => {
-      let cursor = req.from;
-      for (const r of rows.iterate(req.fingerprint, req.classKey, req.from, req.method) as Iterable<{ start_index: bigint; end_index: bigint }>) {
-        if (r.start_index > cursor) break;
-        if (r.end_index > cursor) cursor = r.end_index;
-      }
-      if (cursor >= req.count) return undefined;
-      const next = db.prepare(`SELECT MIN(start_index) AS s FROM chunks WHERE ${BLOCKING} AND start_index >= ?`).safeIntegers(true);
-      const bound = (next.get(req.fingerprint, req.classKey, cursor, req.method, cursor) as { s: bigint | null }).s ?? req.count;
-      let end = cursor + req.size;
-      if (end > bound) end = bound;
-      if (end > req.count) end = req.count;
-      const info = insert.run(req.fingerprint, req.classKey, req.method, cursor, end, req.runId);
-      return { chunkId: Number(info.lastInsertRowid), start: cursor, end };
-    })
-    .immediate();
+  return new ChunkLeaser(db, req).lease(req.from, req.size);
 }
 
 /** Gives a lease back (the chunk failed or the run stopped before sending it). */
@@ -105,4 +175,24 @@ export function doneInstances(db: Store, fingerprint: string, classKey: string, 
     .safeIntegers(true)
     .get(fingerprint, classKey, method) as { n: bigint };
   return row.n;
+}
+
+/** Leased chunks of a class held by runs other than `runId` (live peers once dead runs are reaped). */
+export function otherLeases(db: Store, fingerprint: string, classKey: string, runId: number): number {
+  const row = db.prepare(`SELECT COUNT(*) AS n FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'leased' AND run_id != ?`).get(fingerprint, classKey, runId) as { n: number };
+  return row.n;
+}
+
+/** Finished chunks usable for `method` cover [first, limit) of a class (a --shard run's part). */
+export function rangeCovered(db: Store, fingerprint: string, classKey: string, method: SweepMethod, first: bigint, limit: bigint): boolean {
+  const rows = db
+    .prepare(`SELECT start_index, end_index FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'done' AND (method = 'exact' OR method = ?) AND end_index > ? AND start_index < ? ORDER BY start_index`)
+    .safeIntegers(true)
+    .all(fingerprint, classKey, method, first, limit) as { start_index: bigint; end_index: bigint }[];
+  let cursor = first;
+  for (const r of rows) {
+    if (r.start_index > cursor) break;
+    if (r.end_index > cursor) cursor = r.end_index;
+  }
+  return cursor >= limit;
 }

@@ -93,3 +93,14 @@ export function recordRecheck(db: Store, fingerprint: string, classKey: string, 
     index,
   );
 }
+
+/** Where each stored counterexample of a claim is and its re-check outcome, without reading its values. */
+export function counterexampleKeys(db: Store, fingerprint: string): { classKey: string; index: bigint; recheck: 'fails' | 'holds' | null }[] {
+  const rows = db.prepare('SELECT class_key, instance_index, recheck FROM counterexamples WHERE fingerprint = ?').safeIntegers(true).all(fingerprint) as Record<string, unknown>[];
+  return rows.map((r) => ({ classKey: r.class_key as string, index: r.instance_index as bigint, recheck: (r.recheck as 'fails' | 'holds' | null) ?? null }));
+}
+
+/** A class holds a stored counterexample that was not overturned by a re-check. */
+export function classHasCounterexample(db: Store, fingerprint: string, classKey: string): boolean {
+  return db.prepare(`SELECT 1 FROM counterexamples WHERE fingerprint = ? AND class_key = ? AND (recheck IS NULL OR recheck = 'fails') LIMIT 1`).get(fingerprint, classKey) !== undefined;
+}

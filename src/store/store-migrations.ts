@@ -114,4 +114,9 @@ export const STORE_MIGRATIONS: readonly string[] = [
     PRIMARY KEY (fingerprint, class_key)
   );
   `,
+  // 4: the start token of the process holding a run, so a reused pid is not mistaken for it.
+  `
+  ALTER TABLE runs ADD COLUMN process_start TEXT;
+  CREATE INDEX chunks_leased ON chunks (state) WHERE state = 'leased';
+  `,
 ];

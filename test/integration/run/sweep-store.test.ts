@@ -100,9 +100,11 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
   it('resumes without redoing work, re-checks stored counterexamples first, and extends a raised bound', async () => {
     const again = await sweep(db, claim);
     expect(again.claims[0]!.instancesChecked).toBe(0);
-    expect(again.claims[0]!.rechecked).toEqual({ checked: expectedFailures(8, 5).length, stillFail: expectedFailures(8, 5).length, nowHold: 0 });
+    expect(again.claims[0]!.rechecked).toEqual({ checked: expectedFailures(8, 5).length, stillFail: expectedFailures(8, 5).length, nowHold: 0, pending: 0 });
     const raised = await sweep(db, claim, { max: ['n=9'] });
     expect(raised.claims[0]!.instancesChecked).toBe(2 ** 9);
+    // Re-checking is incremental: what was re-checked once is not recomputed by every later run.
+    expect(raised.claims[0]!.rechecked.checked).toBe(0);
     expect(storeState(db, claim.fingerprint).counterexamples.sort()).toEqual(expectedFailures(9, 5).sort());
   });
 
@@ -164,6 +166,9 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
     expect(expected.filter((key) => key.startsWith('n=5:'))).toEqual(expectedFailures(5, 5));
     expect(stored.sort()).toEqual(expected.sort());
     expect(c.counterexamples).toBe(expected.length);
+    // No class beyond the smallest failing one is begun, let alone finished.
+    for (const k of ['n=6', 'n=7', 'n=8']) expect(c.classes.find((x) => x.key === k)).toMatchObject({ checked: 0, state: 'incomplete' });
+    expect(s.exitCode).toBe(1);
   });
 
   it('stops handing out chunks at --max-counterexamples and at --time-limit, keeping what finished', async () => {
@@ -175,6 +180,25 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
     expect(timed.claims[0]!.stopReason).toBe('time_limit');
     expect(timed.claims[0]!.status).toBe('completed');
     expect(timed.claims[0]!.classes.some((k) => k.state === 'incomplete')).toBe(true);
+    // Stopped early with no counterexample: incomplete (exit 4), never "holds" (README, exit codes).
+    expect(timed.claims[0]!.outcome).toBe('incomplete');
+    expect(timed.exitCode).toBe(4);
+    expect(BigInt(timed.claims[0]!.remaining!.instances)).toBeGreaterThan(0n);
+  });
+
+  it('a time limit that leaves nothing checked is incomplete, not a pass', async () => {
+    const s = await sweep(join(dir, 'zero.sqlite'), fakeClaim({ maxN: 6, failFrom: 99 }, 'zero-claim'), { timeLimit: 1e-9 });
+    expect(s.claims[0]!.instancesChecked).toBe(0);
+    expect(s.claims[0]!.outcome).toBe('incomplete');
+    expect(s.exitCode).toBe(4);
+    // 2 + 4 + … + 64 words in classes n = 1..6 remain (common practice, no source).
+    expect(s.claims[0]!.remaining!.instances).toBe(String(2 ** 7 - 2));
+  });
+
+  it('an empty family is reported as such and never passes', async () => {
+    const s = await sweep(join(dir, 'empty.sqlite'), fakeClaim({ maxN: 0, failFrom: 99 }, 'empty-claim'));
+    expect(s.claims[0]!.outcome).toBe('empty');
+    expect(s.exitCode).toBe(4);
   });
 
   it('an aborted run is interrupted, keeps finished chunks and verifies nothing it did not finish', async () => {
