@@ -22,8 +22,8 @@ export const RunOptions = z.object({
   timeLimit: z.number().positive().optional(),
   exact: z.boolean().default(false),
   json: z.boolean().default(false),
-  /** Instances per chunk: the unit of work, resume and lease. */
-  chunkSize: z.number().int().min(1).max(1_000_000).default(500),
+  /** Instances per chunk: the unit of work, resume and lease (sized by measured work when absent). */
+  chunkSize: z.number().int().min(1).max(1_000_000).optional(),
   /** `--shard i/N`: sweep only shard i of a deterministic N-way partition of the work (see shard-partition.ts). */
   shard: z.string().optional(),
 });

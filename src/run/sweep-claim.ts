@@ -108,6 +108,8 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
       return l;
     };
     const idleReopens = new Map<number, number>();
+    // One listener for the whole sweep: a stop wakes the loop even while it only waits for a peer's lease.
+    const aborted = ctx.signal && !ctx.signal.aborted ? new Promise<void>((resolve) => ctx.signal!.addEventListener('abort', () => resolve(), { once: true })) : undefined;
     let fatal: AppError | undefined;
 
     const dispatch = async (ci: number, lease: LeasedChunk): Promise<void> => {
@@ -173,7 +175,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
       if (action.kind === 'finished') break;
       const wakeups: Promise<unknown>[] = [...inflight];
       if (action.until !== undefined) wakeups.push(sleep(action.until - Date.now()));
-      if (ctx.signal && !ctx.signal.aborted) wakeups.push(new Promise((resolve) => ctx.signal!.addEventListener('abort', resolve, { once: true })));
+      if (aborted) wakeups.push(aborted);
       await Promise.race(wakeups);
     }
     if (fatal) throw fatal;

@@ -53,7 +53,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
       .option('time-limit', { type: 'number', describe: 'stop handing out work after this many seconds' })
       .option('exact', { type: 'boolean', default: false, describe: 'exact polynomials instead of modular identity tests' })
       .option('json', { type: 'boolean', default: false, describe: 'print the summary as one JSON object, no progress bar' })
-      .option('chunk-size', { type: 'number', describe: 'instances per chunk (the unit of resume; default 500)' })
+      .option('chunk-size', { type: 'number', describe: 'instances per chunk (the unit of resume; default: sized by measured work)' })
       .option('shard', { type: 'string', describe: "sweep only shard i of N (e.g. 0/4), balanced by estimated work; use one --db per shard; exit 4 if unfinished" }) as never,
   handler: (args) =>
     runCommand(args.json, async () => {
