@@ -175,7 +175,8 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
       if (action.kind === 'finished') break;
       const wakeups: Promise<unknown>[] = [...inflight];
       if (action.until !== undefined) wakeups.push(sleep(action.until - Date.now()));
-      if (aborted) wakeups.push(aborted);
+      // Once aborted the promise stays resolved: racing it again would spin without yielding to the workers.
+      if (aborted && !ctx.signal!.aborted) wakeups.push(aborted);
       await Promise.race(wakeups);
     }
     if (fatal) throw fatal;
