@@ -72,6 +72,7 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
       'claims[0].rechecked.checked': 0,
       'claims[0].rechecked.stillFail': 0,
       'claims[0].rechecked.nowHold': 0,
+      'claims[0].rechecked.pending': 0,
       'claims[0].firstCounterexample.index': 0, // n = 5: the word 00000 is the first palindrome
       'claims[0].firstCounterexample.left.sides[0]': '00000', // the word of index 0 in class n = 5
       'claims[0].firstCounterexample.right.sides[0]': '00000',
@@ -85,6 +86,7 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
     all.forEach((n, i) => {
       derived[`claims[0].classes[${i}].instances`] = 2 ** n;
       derived[`claims[0].classes[${i}].checked`] = 2 ** n;
+      derived[`claims[0].classes[${i}].done`] = 2 ** n;
       derived[`claims[0].classes[${i}].holds`] = 2 ** n - failing(n);
       derived[`claims[0].classes[${i}].fails`] = failing(n);
     });

@@ -18,11 +18,12 @@ const claim: ClaimSummary = {
   overturned: 0,
   newCounterexamples: 1,
   counterexamples: 1,
-  rechecked: { checked: 0, stillFail: 0, nowHold: 0 },
+  rechecked: { checked: 0, stillFail: 0, nowHold: 0, pending: 0 },
   method: 'exact',
   errorBound: 0,
-  classes: [{ key: 'n=2', size: 6, lengths: [2, 0, 2, 0, 2, 0], instances: '64', checked: 12, holds: 9, fails: 1, state: 'counterexample' }],
+  classes: [{ key: 'n=2', size: 6, lengths: [2, 0, 2, 0, 2, 0], instances: '64', done: '64', checked: 12, holds: 9, fails: 1, state: 'counterexample' }],
   firstCounterexample: { classKey: 'n=2', index: '5', size: 6, left: side('1'), right: side('2'), replay: 'puzzlesweep replay demo.json --instance n=2:5' },
+  outcome: 'counterexample',
   elapsedMs: 1500,
 };
 const summary: SweepSummary = { db: 'results/x.sqlite', claims: [claim], interrupted: false, elapsedMs: 2000, workerCrashes: 0, exitCode: 1 };
@@ -43,6 +44,24 @@ describe('sweepSummaryText', () => {
     const text = sweepSummaryText({ ...summary, interrupted: true, exitCode: 130, claims: [{ ...claim, method: 'modular', errorBound: 3e-12 }] });
     expect(text).toContain('chance of a false "holds" ≤ 3.00e-12');
     expect(text).toMatch(/^result: interrupted: .*run the same command again to resume/m);
+  });
+
+  it('an incomplete run says what remains and how to finish, and never that the claim holds', () => {
+    const incomplete: ClaimSummary = {
+      ...claim,
+      stopReason: 'time_limit',
+      counterexamples: 0,
+      newCounterexamples: 0,
+      firstCounterexample: undefined,
+      outcome: 'incomplete',
+      remaining: { classes: ['n=3'], instances: '400', rechecks: 0 },
+      classes: [{ ...claim.classes[0]!, state: 'incomplete', done: '112', instances: '512', key: 'n=3' }],
+    };
+    const text = sweepSummaryText({ ...summary, exitCode: 4, claims: [incomplete] });
+    expect(text).toContain('(112 of 512 done)');
+    expect(text).toContain('unfinished: 400 instances in 1 class (n=3); run the same command again to finish (with a larger --time-limit, or none)');
+    expect(text.split('\n').at(-1)).toMatch(/^result: incomplete: /);
+    expect(text).not.toMatch(/holds on/);
   });
 
   it('writes bigints as decimal strings in JSON', () => {
