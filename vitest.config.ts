@@ -12,6 +12,9 @@ export default defineConfig({
           include: ['test/unit/**/*.test.ts'],
           // Refuses child processes, worker threads and SQLite files: those tests belong in integration.
           setupFiles: ['test/setup/unit-is-pure.ts'],
+          // Pure tests can share module instances: one import of src per worker instead of one per file
+          // (measured: 9.7 s instead of 29 s of CPU for the whole project). Do not leave global state behind.
+          isolate: false,
           testTimeout: 120_000,
         },
       },
