@@ -53,6 +53,8 @@ const INPUT_ERRORS: ReadonlySet<ErrorCode> = new Set([
   'invalid_boundary',
   'invalid_piece_set',
   'unknown_theory',
+  'invalid_weight_formula',
+  'division_by_zero',
   'invalid_argument',
   'invalid_claim',
   'invalid_json',

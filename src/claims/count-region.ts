@@ -2,6 +2,10 @@ import {
   completeToTriangle,
   countBoundary,
   fillingCountSemiring,
+  fractionSemiring,
+  valueRing,
+  type Fraction,
+  type StripLetter,
   generatingSemiring,
   integerSemiring,
   statisticWeigher,
@@ -18,7 +22,9 @@ import { hasIntegerWeights } from './resolve-theory.js';
 
 export type RegionValue =
   | { readonly type: 'integer'; readonly value: SafeInt }
-  | { readonly type: 'polynomial'; readonly value: Polynomial; readonly size: number; readonly variableNames: readonly string[] };
+  | { readonly type: 'polynomial'; readonly value: Polynomial; readonly size: number; readonly variableNames: readonly string[] }
+  /** Laurent polynomials in t_1..t_N, or quotients in y_1..y_N (named parameters follow, as for polynomials). */
+  | { readonly type: 'fraction'; readonly value: Fraction; readonly size: number; readonly letter: StripLetter; readonly variableNames: readonly string[] };
 
 export interface CountResult {
   readonly theory: string;
@@ -49,7 +55,12 @@ export function countRegion(pieces: PieceSet, sides: readonly string[], options:
     const target = completion ?? { region, sides };
     const puzzles = countBoundary(target.region, target.sides, pieces, { semiring: fillingCountSemiring });
     let value: RegionValue;
-    if (hasIntegerWeights(pieces)) {
+    const ringKind = valueRing(pieces);
+    if (ringKind.kind === 'fraction') {
+      const ring = fractionSemiring(target.region.size, ringKind.letter);
+      const v = countBoundary(target.region, target.sides, pieces, { semiring: ring });
+      value = { type: 'fraction', value: v, size: ring.size, letter: ring.letter, variableNames: ring.variableNames };
+    } else if (hasIntegerWeights(pieces)) {
       value = { type: 'integer', value: countBoundary(target.region, target.sides, pieces, { semiring: integerSemiring }) };
     } else {
       const ring = polynomialSemiring(target.region.size);

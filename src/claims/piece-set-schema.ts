@@ -7,6 +7,10 @@ export const weightSchema = z.union([
   z.number().int(),
   z.literal('position'),
   z.object({ variable: z.string().regex(/^[A-Za-z][A-Za-z0-9_]*$/, 'Variable name: expected a letter followed by letters, digits or _') }).strict(),
+  z
+    .object({ formula: z.string().min(1, 'Weight formula: expected a nonempty formula') })
+    .strict()
+    .describe('A formula in y_i, y_j (or t_i, t_j) of the piece strips, integers and named parameters: + - * / ^ and parentheses.'),
 ]);
 
 /** A triangle's three edge labels, named by the direction of the edge: horizontal, rising (/), falling (\). */

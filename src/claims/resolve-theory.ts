@@ -1,13 +1,21 @@
 import { readFileSync } from 'node:fs';
-import { buildPieceSet, isBuiltinTheory, theoryPieceSet, type PieceSet, type WeightSpec } from '../engine/index.js';
+import { buildPieceSet, EngineError, isBuiltinTheory, parseWeightFormula, theoryPieceSet, valueRing, type PieceSet, type WeightSpec } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
 import { pieceSetSchema, type PieceSetInput } from './piece-set-schema.js';
 import { fromZodError } from './zod-issue.js';
 
-function toWeight(w: PieceSetInput['pieces'][number]['weight']): WeightSpec | undefined {
+function toWeight(w: PieceSetInput['pieces'][number]['weight'], index: number): WeightSpec | undefined {
   if (w === undefined) return undefined;
   if (typeof w === 'number') return { type: 'integer', value: w };
   if (w === 'position') return { type: 'position' };
+  if ('formula' in w) {
+    try {
+      return { type: 'formula', text: w.formula, formula: parseWeightFormula(w.formula) };
+    } catch (e) {
+      if (e instanceof EngineError) throw new EngineError(e.code, e.message, `pieces[${index}].weight.formula`, e.hint);
+      throw e;
+    }
+  }
   return { type: 'variable', name: w.variable };
 }
 
@@ -17,18 +25,20 @@ export function pieceSetFromJson(data: unknown, file?: string, prefix = ''): Pie
   if (!parsed.success) throw fromZodError(parsed.error, 'invalid_piece_set', data, file, prefix);
   const spec = parsed.data;
   try {
-    return buildPieceSet({
+    const set = buildPieceSet({
       name: spec.name,
       boundaryLabels: spec.boundaryLabels,
-      pieces: spec.pieces.map((p) => ({
+      pieces: spec.pieces.map((p, index) => ({
         edges: p.edges,
         orientations: p.orientations,
         ...(p.name !== undefined ? { name: p.name } : {}),
         ...(p.kind !== undefined ? { kind: p.kind } : {}),
         ...(p.rotations !== undefined ? { rotations: p.rotations } : {}),
-        ...(toWeight(p.weight) ? { weight: toWeight(p.weight)! } : {}),
+        ...(p.weight !== undefined ? { weight: toWeight(p.weight, index)! } : {}),
       })),
     });
+    valueRing(set); // rejects a set that mixes the strip letters y and t
+    return set;
   } catch (e) {
     throw toAppError(e, prefix, file);
   }

@@ -4,6 +4,8 @@ export type EngineErrorCode =
   | 'invalid_boundary'
   | 'invalid_piece_set'
   | 'unknown_theory'
+  | 'invalid_weight_formula'
+  | 'division_by_zero'
   | 'overflow'
   | 'internal_error';
 

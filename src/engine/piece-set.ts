@@ -1,11 +1,13 @@
 import { EngineError } from './engine-error.js';
 import type { Orientation } from './lattice.js';
+import type { FormulaNode } from './weight-formula.js';
 
-/** How a piece contributes to the value: a constant, a named formal variable, or y_j − y_i by position. */
+/** How a piece contributes to the value: a constant, a named formal variable, y_j − y_i by position, or a formula. */
 export type WeightSpec =
   | { readonly type: 'integer'; readonly value: number }
   | { readonly type: 'variable'; readonly name: string }
-  | { readonly type: 'position' };
+  | { readonly type: 'position' }
+  | { readonly type: 'formula'; readonly text: string; readonly formula: FormulaNode };
 
 /** One unit triangle a puzzle may use; `labels` are clockwise: up = (left, right, bottom), down = (top, right, left). */
 export interface Piece {

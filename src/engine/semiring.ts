@@ -4,6 +4,8 @@
  */
 export interface Semiring<T> {
   readonly name: string;
+  /** True for rings where every piece weighs one whatever it declares (counting fillings). */
+  readonly weightless?: boolean;
   readonly zero: T;
   readonly one: T;
   add(a: T, b: T): T;
@@ -18,5 +20,9 @@ export interface Semiring<T> {
   fromInteger(n: number): T;
   variable(name: string): T;
   position(i: number, j: number): T;
+  /** Optional: the strip variable y_m or t_m (1-based m) of a weight formula. */
+  strip?(letter: 'y' | 't', index: number): T;
+  /** Optional: the exact quotient a / b of a weight formula; rings without it reject quotients. */
+  divide?(a: T, b: T): T;
   toText(a: T): string;
 }

@@ -1,6 +1,8 @@
 import type { UnitTriangle } from './lattice.js';
 import type { Piece } from './piece-set.js';
+import { EngineError } from './engine-error.js';
 import type { Semiring } from './semiring.js';
+import { evaluateFormula, type FormulaRing } from './weight-formula.js';
 import { generatingSemiring, type Generating } from './semirings/statistic-semiring.js';
 
 /** The weight of one piece placed on one unit triangle. */
@@ -18,10 +20,33 @@ export function positionIndices(t: UnitTriangle): { i: number; j: number } {
 export function declaredWeigher<T>(semiring: Semiring<T>): Weigher<T> {
   return (piece, triangle) => {
     const w = piece.weight;
+    if (semiring.weightless) return semiring.one;
     if (w.type === 'integer') return semiring.fromInteger(w.value);
     if (w.type === 'variable') return semiring.variable(w.name);
     const { i, j } = positionIndices(triangle);
+    if (w.type === 'formula') return evaluateFormula(w.formula, formulaRing(semiring), { i, j });
     return semiring.position(i, j);
+  };
+}
+
+/** The operations of a semiring a formula needs; throws `invalid_weight_formula` when it cannot divide. */
+export function formulaRing<T>(semiring: Semiring<T>): FormulaRing<T> {
+  return {
+    one: semiring.one,
+    add: (a, b) => semiring.add(a, b),
+    mul: (a, b) => semiring.mul(a, b),
+    fromInteger: (n) => semiring.fromInteger(n),
+    variable: (name) => semiring.variable(name),
+    strip: (letter, index) => {
+      if (!semiring.strip) throw new EngineError('invalid_weight_formula', `Weight formula: expected a value ring with strip variables, received the ${semiring.name} ring`, 'weight.formula');
+      return semiring.strip(letter, index);
+    },
+    divide: (a, b) => {
+      if (!semiring.divide) {
+        throw new EngineError('invalid_weight_formula', `Weight formula: expected a value ring that divides, received the ${semiring.name} ring`, 'weight.formula', 'count with exact fractions or modular values');
+      }
+      return semiring.divide(a, b);
+    },
   };
 }
 

@@ -1,4 +1,4 @@
-import { countCompletions, integerSemiring, polynomialSemiring, triangleRegion, type PieceSet } from '../engine/index.js';
+import { countCompletions, fractionSemiring, integerSemiring, polynomialSemiring, triangleRegion, valueRing, type PieceSet } from '../engine/index.js';
 import { toAppError } from '../errors.js';
 import { hasIntegerWeights } from '../claims/resolve-theory.js';
 import type { RegionValue } from '../claims/count-region.js';
@@ -25,7 +25,13 @@ export function expandProduct(pieces: PieceSet, lambda: string, mu: string): Pro
   try {
     // The open side is side 5, read clockwise (right to left); ν is read left to right.
     const nu = (side5: string) => [...side5].reverse().join('');
-    if (hasIntegerWeights(pieces)) {
+    const ringKind = valueRing(pieces);
+    if (ringKind.kind === 'fraction') {
+      const ring = fractionSemiring(n, ringKind.letter);
+      for (const [side5, v] of countCompletions(triangleRegion(n), sides, pieces, { semiring: ring })) {
+        terms.push({ nu: nu(side5), value: { type: 'fraction', value: v, size: n, letter: ring.letter, variableNames: ring.variableNames } });
+      }
+    } else if (hasIntegerWeights(pieces)) {
       for (const [side5, v] of countCompletions(triangleRegion(n), sides, pieces, { semiring: integerSemiring })) {
         terms.push({ nu: nu(side5), value: { type: 'integer', value: v } });
       }

@@ -1,11 +1,18 @@
+import { evaluateFormulaText, rational, rationalAdd, rationalMul, type RefRational } from './naive-formula.js';
 import { RefPolynomial } from './ref-polynomial.js';
+
+// Named parameters of a formula: every name that is not a strip variable.
+function formulaParameters(text: string): string[] {
+  return (text.match(/[A-Za-z][A-Za-z0-9_]*/g) ?? []).filter((n) => !/^[yt]_?[ij]$/.test(n));
+}
 import { ReferenceComputationError } from './reference-error.js';
 
 /** Weight of a piece: an integer, a named variable, or the position weight y_j − y_i of its place. */
 export type NaivePieceWeight =
   | { type: 'integer'; value: number }
   | { type: 'variable'; name: string }
-  | { type: 'position' };
+  | { type: 'position' }
+  | { type: 'formula'; text: string };
 
 /** A unit-triangle piece, labels clockwise: up = (left, right, bottom), down = (top, right, left). */
 export interface NaivePiece {
@@ -17,7 +24,10 @@ export interface NaivePiece {
 /** Result of a naive count: the number of fillings and Σ over fillings of the product of piece weights. */
 export interface NaiveCountResult {
   fillings: bigint;
+  /** The value when it is a polynomial; reading it throws when the formulas' quotients leave a denominator. */
   value: RefPolynomial;
+  /** The value as a quotient of polynomials (always present). */
+  quotient: RefRational;
   /** Names of the named-weight variables, in order; name i is polynomial variable N + i (N = completed side). */
   variableNames: string[];
 }
@@ -79,6 +89,7 @@ function checkPieces(pieces: readonly NaivePiece[]): void {
     const ok =
       (w.type === 'integer' && Number.isInteger(w.value)) ||
       (w.type === 'variable' && typeof w.name === 'string' && w.name !== '') ||
+      (w.type === 'formula' && typeof w.text === 'string') ||
       w.type === 'position';
     if (!ok) throw new ReferenceComputationError('invalid_piece', `Piece ${i} weight: expected integer, variable or position, received ${JSON.stringify(w)}`);
   });
@@ -115,24 +126,25 @@ export function naiveCount(
     }
   }
 
-  const names = [...new Set(pieces.flatMap((p) => (p.weight.type === 'variable' ? [p.weight.name] : [])))].sort();
-  const weightOf = (p: NaivePiece, t: { up: boolean; x: number; y: number }): RefPolynomial | null => {
+  const names = [...new Set(pieces.flatMap((p) => (p.weight.type === 'variable' ? [p.weight.name] : p.weight.type === 'formula' ? formulaParameters(p.weight.text) : [])))].sort();
+  const weightOf = (p: NaivePiece, t: { up: boolean; x: number; y: number }): RefRational | null => {
     const w = p.weight;
-    if (w.type === 'integer') return w.value === 1 ? null : RefPolynomial.constant(BigInt(w.value));
-    if (w.type === 'variable') return RefPolynomial.variable(N + names.indexOf(w.name));
+    if (w.type === 'integer') return w.value === 1 ? null : rational(RefPolynomial.constant(BigInt(w.value)));
+    if (w.type === 'variable') return rational(RefPolynomial.variable(N + names.indexOf(w.name)));
     // The least x+y is at (x,y) for an up triangle and at (x+1,y) or (x,y+1) for a down one.
     const i = t.x + 1;
     const j = t.x + t.y + (t.up ? 0 : 1) + 1;
-    return RefPolynomial.difference(j - 1, i - 1);
+    if (w.type === 'formula') return evaluateFormulaText(w.text, { i, j }, (name) => RefPolynomial.variable(N + names.indexOf(name)));
+    return rational(RefPolynomial.difference(j - 1, i - 1));
   };
   const byOrientation = { up: pieces.filter((p) => p.orientation === 'up'), down: pieces.filter((p) => p.orientation === 'down') };
 
   let fillings = 0n;
-  let value = RefPolynomial.zero();
-  const place = (index: number, weight: RefPolynomial): void => {
+  let value = rational(RefPolynomial.zero());
+  const place = (index: number, weight: RefRational): void => {
     if (index === triangles.length) {
       fillings++;
-      value = value.add(weight);
+      value = rationalAdd(value, weight);
       return;
     }
     const t = triangles[index]!;
@@ -149,11 +161,19 @@ export function naiveCount(
       }
       if (fits) {
         const w = weightOf(p, t);
-        place(index + 1, w === null ? weight : weight.mul(w));
+        place(index + 1, w === null ? weight : rationalMul(weight, w));
       }
       for (const e of fresh) labels.delete(e);
     }
   };
-  place(0, RefPolynomial.constant(1n));
-  return { fillings, value, variableNames: names };
+  place(0, rational(RefPolynomial.constant(1n)));
+  const quotient = value;
+  return {
+    fillings,
+    quotient,
+    get value(): RefPolynomial {
+      return quotient.num.divExact(quotient.den);
+    },
+    variableNames: names,
+  };
 }

@@ -25,6 +25,7 @@ export const integerSemiring: Semiring<SafeInt> = {
 export const fillingCountSemiring: Semiring<SafeInt> = {
   ...integerSemiring,
   name: 'fillings',
+  weightless: true,
   fromInteger: () => 1,
   variable: () => 1,
   position: () => 1,

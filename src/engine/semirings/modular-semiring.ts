@@ -1,4 +1,15 @@
+import { EngineError } from '../engine-error.js';
 import type { Semiring } from '../semiring.js';
+
+// b^{-1} mod p by the extended Euclidean algorithm (p prime, 0 < b < p; all values stay below 2^26).
+function inverseMod(b: number, p: number): number {
+  let [r0, r1, s0, s1] = [p, b, 0, 1];
+  while (r1 !== 0) {
+    const q = Math.floor(r0 / r1);
+    [r0, r1, s0, s1] = [r1, r0 - q * r1, s1, s0 - q * s1];
+  }
+  return ((s0 % p) + p) % p;
+}
 
 /** Residues of one value modulo each prime, at one random evaluation point of the variables. */
 export type Residues = readonly number[];
@@ -98,6 +109,14 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
       const yj = point(`y${substitution ? substitution(j) : j}`);
       return of((p, k) => (yj[k]! - yi[k]! + p) % p);
     },
+    strip: (letter, index) => point(`${letter}${substitution ? substitution(index) : index}`),
+    divide: (a, b) =>
+      of((p, k) => {
+        if (b[k] === 0) {
+          throw new EngineError('division_by_zero', `Weight quotient: expected a denominator that is nonzero modulo ${p}, received 0`, 'weight.formula', 'a strip difference such as y_j − y_i vanishes on pieces whose two strips coincide');
+        }
+        return (a[k]! * inverseMod(b[k]!, p)) % p;
+      }),
     toText: (a) => `[${a.map((r, k) => `${r} mod ${primes[k]}`).join(', ')}]`,
   };
 }

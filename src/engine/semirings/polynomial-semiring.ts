@@ -32,6 +32,7 @@ export function polynomialSemiring(size: number): PolynomialSemiring {
       return variablePoly(size + k);
     },
     position: (i, j) => subPoly(variablePoly(j - 1), variablePoly(i - 1)),
+    strip: (_letter, index) => variablePoly(index - 1),
     toText: (a) => polyText(a, variableName),
   };
 }

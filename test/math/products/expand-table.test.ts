@@ -16,6 +16,7 @@ const canonical = (terms: Terms) =>
 
 function termsOf(v: RegionValue, n: number): Terms {
   if (v.type === 'integer') return [{ coefficient: BigInt(v.value), exponents: new Array<number>(n).fill(0) }];
+  if (v.type === 'fraction') throw new Error('the built-in theories compared here have polynomial values');
   return polyTerms(v.value, n);
 }
 
