@@ -58,6 +58,8 @@ export interface InstanceResult {
    * the representative of a pair (T(b) ≠ b, T(b) later in the class): T(b)'s index, decided by this result too.
    */
   readonly partnerIndex?: bigint;
+  /** For the representative of a pair: the partner's status, decided by this same comparison. */
+  readonly partnerStatus?: 'holds' | 'fails' | 'skipped_zero';
   /** `modular`: values compared by evaluation modulo primes; `errorBound` is the chance of a false "holds". */
   readonly method: 'exact' | 'modular';
   readonly errorBound?: number;

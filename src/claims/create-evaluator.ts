@@ -121,6 +121,7 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
         ...shown(),
         method: mode,
         ...partner,
+        ...(pairable ? { partnerStatus: 'skipped_zero' as const } : {}),
         // "is zero" was itself a modular identity test, with the same kind of error bound
         ...(mode === 'modular' ? { errorBound: errorBoundOf(values.left, values.compared ?? values.left) } : {}),
       };
@@ -146,12 +147,19 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
       holds = program.relation.holds(values.left, values.compared!);
       errorBound = 0;
     }
+    // The comparison decides b and, for a representative, T(b) too (the relation is symmetric and σ an
+    // involution). Under nonzeroOnly each of the two is skipped when its own left value is zero.
+    const outcome = holds ? ('holds' as const) : ('fails' as const);
+    const zeroOnly = claim.family.nonzeroOnly;
+    const selfStatus = zeroOnly && isZeroValue(values.left) ? 'skipped_zero' : outcome;
+    const partnerStatus = zeroOnly && isZeroValue(values.compared!) ? 'skipped_zero' : outcome;
     return {
       ...base,
-      status: holds ? 'holds' : 'fails',
+      status: selfStatus,
       ...shown(),
       vacuous: bothZero(),
       ...partner,
+      ...(pairable ? { partnerStatus } : {}),
       method: mode,
       ...(mode === 'modular' ? { errorBound } : {}),
     };

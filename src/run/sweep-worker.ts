@@ -1,6 +1,5 @@
-import type { ClaimPlan, Instance, InstanceResult, SizeClass } from '../claims/claim-api.js';
-import type { CounterexampleRecord } from '../store/index.js';
-import { intersectPermutations } from '../store/permutation-records.js';
+import type { SizeClass } from '../claims/claim-api.js';
+import { evaluateChunk } from './evaluate-chunk.js';
 import { importClaimRuntime, type ClaimRuntime } from './claim-runtime-module.js';
 import { serializeError } from './serialize-error.js';
 import type { ChunkResult, ChunkTask, ConfirmTask, WorkerReply, WorkerTask } from './worker-task.js';
@@ -42,55 +41,9 @@ function maybeCrash(task: ChunkTask): void {
   if (where === `${task.classKey}:${task.start}` && task.attempt < Number(times ?? 1)) process.exit(70);
 }
 
-function counterexample(cls: SizeClass, r: InstanceResult): CounterexampleRecord {
-  return { classKey: cls.key, index: r.index, size: cls.size, lengths: cls.lengths, left: r.left, right: r.right, permutation: r.permutation };
-}
-
-function* unranked(plan: ClaimPlan, cls: SizeClass, start: bigint, end: bigint): Generator<Instance> {
-  for (let i = start; i < end; i++) yield plan.instanceAt(cls, i);
-}
-
 function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
-  const began = performance.now();
   const cls = sizeClass(l, task.classKey);
-  const { plan, evaluator } = l.runtime;
-  const out = { checked: 0, holds: 0, fails: 0, skippedZero: 0, paired: 0, overturned: 0, errorBound: 0, exact: true };
-  const counterexamples: CounterexampleRecord[] = [];
-  const permutations: { index: bigint; permutation: readonly number[] }[] = [];
-  let common: Map<string, number[]> | undefined;
-  let truncated = false;
-  const instances: Iterable<Instance> = plan.instancesFrom ? plan.instancesFrom(cls, task.start, task.end) : unranked(plan, cls, task.start, task.end);
-  for (const instance of instances) {
-    const i = instance.index;
-    const r = evaluator.evaluate(instance);
-    out.checked++;
-    if (r.method === 'modular') out.exact = false;
-    if (r.status === 'fails') {
-      // Only an exact recomputation may turn a "fails" into a stored counterexample.
-      const c = evaluator.confirm(instance);
-      if (c.status === 'fails') {
-        out.fails++;
-        counterexamples.push(counterexample(cls, c));
-      } else {
-        out.overturned++;
-        out.holds++;
-      }
-    } else if (r.status === 'holds') {
-      out.holds++;
-      if (r.method === 'modular') out.errorBound += r.errorBound ?? 0;
-      if (r.permutation) permutations.push({ index: i, permutation: r.permutation });
-      if (r.permutations) {
-        common = intersectPermutations(common, r.permutations);
-        truncated ||= r.permutationsTruncated === true;
-      }
-    } else if (r.status === 'skipped_zero') {
-      out.skippedZero++;
-      if (r.method === 'modular') out.errorBound += r.errorBound ?? 0;
-    }
-    else out.paired++;
-  }
-  const commonPermutations = common ? [...common.values()] : undefined;
-  return { ...out, durationMs: performance.now() - began, counterexamples, permutations, commonPermutations, permutationsTruncated: truncated };
+  return evaluateChunk(l.runtime.plan, l.runtime.evaluator, cls, task.start, task.end, task.keepPermutations ?? true);
 }
 
 function confirmAll(l: Loaded, task: ConfirmTask): WorkerReply {

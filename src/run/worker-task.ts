@@ -19,6 +19,8 @@ export interface ChunkTask extends TaskBase {
   readonly kind: 'chunk';
   readonly start: bigint;
   readonly end: bigint;
+  /** Store each instance's permutation too (default true); class-wide intersections are always kept. */
+  readonly keepPermutations?: boolean | undefined;
 }
 
 /** Re-check stored counterexamples exactly. */

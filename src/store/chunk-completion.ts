@@ -8,6 +8,9 @@ export interface ChunkFindings {
   readonly fails: number;
   readonly skippedZero: number;
   readonly paired: number;
+  /** Of `holds`: both compared values zero (vacuous), or some value nonzero. */
+  readonly vacuous?: number | undefined;
+  readonly nonzero?: number | undefined;
   /** Union bound on a false "holds" over the chunk's modular comparisons (0 when exact). */
   readonly errorBound: number;
   /** Every comparison of the chunk was exact: it then counts for --exact runs too. */
@@ -38,10 +41,10 @@ export function completeChunk(db: Store, c: ChunkCompletion): number {
     .transaction(() => {
       const updated = db
         .prepare(
-          `UPDATE chunks SET state = 'done', method = CASE WHEN ? THEN 'exact' ELSE method END, checked = ?, holds = ?, fails = ?, skipped_zero = ?, paired = ?, error_bound = ?,
+          `UPDATE chunks SET state = 'done', method = CASE WHEN ? THEN 'exact' ELSE method END, checked = ?, holds = ?, fails = ?, skipped_zero = ?, paired = ?, vacuous = ?, nonzero = ?, error_bound = ?,
              duration_ms = ?, finished_at = ?, common_permutations = ?, permutations_truncated = ? WHERE chunk_id = ? AND run_id = ? AND state = 'leased'`,
         )
-        .run(c.exact ? 1 : 0, c.checked, c.holds, c.fails, c.skippedZero, c.paired, c.errorBound, c.durationMs, new Date().toISOString(), c.commonPermutations ? JSON.stringify(c.commonPermutations) : null, c.permutationsTruncated ? 1 : 0, c.chunkId, c.runId);
+        .run(c.exact ? 1 : 0, c.checked, c.holds, c.fails, c.skippedZero, c.paired, c.vacuous ?? 0, c.nonzero ?? null, c.errorBound, c.durationMs, new Date().toISOString(), c.commonPermutations ? JSON.stringify(c.commonPermutations) : null, c.permutationsTruncated ? 1 : 0, c.chunkId, c.runId);
       if (updated.changes === 0) return -1;
       let added = 0;
       for (const ce of c.counterexamples) if (insertCounterexample(db, c.fingerprint, c.runId, ce)) added++;

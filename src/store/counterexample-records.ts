@@ -8,8 +8,14 @@ export interface CounterexampleRecord {
   readonly size: number;
   readonly lengths: readonly number[];
   readonly left: Measured;
+  /** T(b) measured in its own right (what `count` prints for it). */
   readonly right: Measured;
+  /** Substitution relations: σ(right value), the value compared with the left one, and σ written out. */
+  readonly substituted?: Measured | undefined;
+  readonly substitution?: string | undefined;
   readonly permutation?: readonly number[] | undefined;
+  /** Found through its pair: the index of the representative whose comparison decided this boundary too. */
+  readonly partnerOf?: bigint | undefined;
 }
 
 /** A stored counterexample with its bookkeeping. */
@@ -26,8 +32,8 @@ export function insertCounterexample(db: Store, fingerprint: string, runId: numb
     .prepare(
       `INSERT OR IGNORE INTO counterexamples (fingerprint, class_key, instance_index, size, lengths,
          left_theory, left_sides, left_value, left_json, right_theory, right_sides, right_value, right_json,
-         permutation, confirmed_exact, found_run)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 1, ?)`,
+         permutation, confirmed_exact, found_run, partner_of, substitution, substituted_value, substituted_json)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 1, ?, ?, ?, ?, ?)`,
     )
     .run(
       fingerprint,
@@ -45,6 +51,10 @@ export function insertCounterexample(db: Store, fingerprint: string, runId: numb
       JSON.stringify({ lengths: c.right.lengths, value: c.right.json }),
       c.permutation ? JSON.stringify(c.permutation) : null,
       runId,
+      c.partnerOf ?? null,
+      c.substitution ?? null,
+      c.substituted?.text ?? null,
+      c.substituted ? JSON.stringify({ lengths: c.substituted.lengths, value: c.substituted.json }) : null,
     );
   return info.changes > 0;
 }
@@ -64,6 +74,9 @@ function fromRow(r: Record<string, unknown>): StoredCounterexample {
     left: measured(r.left_theory as string, r.left_sides as string, r.left_value as string, r.left_json as string),
     right: measured(r.right_theory as string, r.right_sides as string, r.right_value as string, r.right_json as string),
     permutation: r.permutation ? (JSON.parse(r.permutation as string) as number[]) : undefined,
+    partnerOf: r.partner_of === null || r.partner_of === undefined ? undefined : (r.partner_of as bigint),
+    substitution: (r.substitution as string | null) ?? undefined,
+    substituted: r.substituted_value === null || r.substituted_value === undefined ? undefined : measured(r.right_theory as string, r.right_sides as string, r.substituted_value as string, r.substituted_json as string),
     foundRun: Number(r.found_run),
     recheckedRun: r.rechecked_run === null ? null : Number(r.rechecked_run),
     recheck: (r.recheck as 'fails' | 'holds' | null) ?? null,

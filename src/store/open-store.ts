@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import Database from 'better-sqlite3';
 import { AppError } from '../errors.js';
+import { registerStoreFunctions } from './store-functions.js';
 import { STORE_MIGRATIONS } from './store-migrations.js';
 
 /** An open store: the better-sqlite3 handle; every reader and writer in src/store takes it. */
@@ -49,6 +50,7 @@ export function openStore(path: string, options: { readonly?: boolean } = {}): S
   if (!options.readonly) {
     db.pragma('journal_mode = WAL');
     db.pragma('synchronous = NORMAL');
+    registerStoreFunctions(db);
     migrate(db);
   }
   return db;

@@ -119,4 +119,47 @@ export const STORE_MIGRATIONS: readonly string[] = [
   ALTER TABLE runs ADD COLUMN process_start TEXT;
   CREATE INDEX chunks_leased ON chunks (state) WHERE state = 'leased';
   `,
+  // 5 (issue 7): counts of boundaries, values as they are, fingerprints of the mathematics.
+  // - counterexamples: partner_of (found through its pair: the representative's index), σ(value) apart from
+  //   T(b)'s own value. Older rows of substitution claims kept only σ(value), in right_value: it moves to
+  //   substituted_value and right_value says so.
+  // - chunks: vacuous / nonzero holds; an old chunk's partners (paired) held by the rule of its time, so they
+  //   join its holds, and its nonzero count is unknown (NULL).
+  // - claims: every fingerprint is recomputed from the canonical JSON without statement and upper bounds
+  //   (puzzlesweep_fingerprint, registered by openStore), and every row follows its claim.
+  `
+  ALTER TABLE counterexamples ADD COLUMN partner_of INTEGER;
+  ALTER TABLE counterexamples ADD COLUMN substitution TEXT;
+  ALTER TABLE counterexamples ADD COLUMN substituted_value TEXT;
+  ALTER TABLE counterexamples ADD COLUMN substituted_json TEXT;
+  UPDATE counterexamples
+     SET substituted_value = right_value, substituted_json = right_json,
+         right_value = '(not kept by this older store: replay shows it)',
+         right_json = json_object('lengths', json_extract(right_json, '$.lengths'), 'value', NULL)
+   WHERE fingerprint IN (SELECT fingerprint FROM claims WHERE json_extract(canonical_json, '$.compare.relation.type') = 'equalAfterSubstitution');
+
+  ALTER TABLE chunks ADD COLUMN vacuous INTEGER NOT NULL DEFAULT 0;
+  ALTER TABLE chunks ADD COLUMN nonzero INTEGER;
+  UPDATE chunks SET holds = holds + paired WHERE state = 'done';
+
+  CREATE TEMP TABLE rekey AS
+    SELECT fingerprint AS old, puzzlesweep_fingerprint(canonical_json, engine_version) AS new, first_seen_at FROM claims;
+  DELETE FROM rekey WHERE old = new;
+  INSERT OR IGNORE INTO claims (fingerprint, claim_id, canonical_json, engine_version, source_file, first_seen_at)
+    SELECT r.new, c.claim_id, c.canonical_json, c.engine_version, c.source_file, c.first_seen_at
+      FROM claims c JOIN rekey r ON c.fingerprint = r.old ORDER BY c.first_seen_at DESC, c.rowid DESC;
+  UPDATE runs SET fingerprint = (SELECT new FROM rekey WHERE old = runs.fingerprint) WHERE fingerprint IN (SELECT old FROM rekey);
+  UPDATE chunks SET fingerprint = (SELECT new FROM rekey WHERE old = chunks.fingerprint) WHERE fingerprint IN (SELECT old FROM rekey);
+  UPDATE OR IGNORE counterexamples SET fingerprint = (SELECT new FROM rekey WHERE old = counterexamples.fingerprint) WHERE fingerprint IN (SELECT old FROM rekey);
+  UPDATE OR IGNORE verified_classes SET fingerprint = (SELECT new FROM rekey WHERE old = verified_classes.fingerprint) WHERE fingerprint IN (SELECT old FROM rekey);
+  UPDATE OR IGNORE permutations SET fingerprint = (SELECT new FROM rekey WHERE old = permutations.fingerprint) WHERE fingerprint IN (SELECT old FROM rekey);
+  UPDATE OR IGNORE discover_evidence SET fingerprint = (SELECT new FROM rekey WHERE old = discover_evidence.fingerprint) WHERE fingerprint IN (SELECT old FROM rekey);
+  -- Rows left behind repeat a row of the same class and index under the merged claim: the same result.
+  DELETE FROM counterexamples WHERE fingerprint IN (SELECT old FROM rekey);
+  DELETE FROM verified_classes WHERE fingerprint IN (SELECT old FROM rekey);
+  DELETE FROM permutations WHERE fingerprint IN (SELECT old FROM rekey);
+  DELETE FROM discover_evidence WHERE fingerprint IN (SELECT old FROM rekey);
+  DELETE FROM claims WHERE fingerprint IN (SELECT old FROM rekey);
+  DROP TABLE rekey;
+  `,
 ];

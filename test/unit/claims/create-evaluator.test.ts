@@ -151,17 +151,21 @@ describe('createEvaluator', () => {
       const zero = Number(countBoundary(makeRegion(lengthsOf(r.left.sides)), r.left.sides, pieces, { semiring: fillingCountSemiring })) === 0;
       expect(r.status === 'skipped_zero').toBe(zero);
     }
-    // With pairing, a zero left value still stands for its nonzero partner: no failure is lost.
+    // With pairing, a zero left value still stands for its nonzero partner: no failure is lost. A failing
+    // boundary is decided by its own result or, when paired, by its representative's `partnerStatus`.
     const paired = sweep(claim);
+    const plan = planClaim(compileClaimProgram(claim));
     for (const r of plain.filter((x) => x.status === 'fails')) {
       const p = paired.find((x) => x.classKey === r.classKey && x.index === r.index)!;
-      const partner = p.status === 'paired' ? paired.find((x) => x.classKey === r.classKey && x.index === p.partnerIndex)! : p;
-      expect(partner.status).toBe('fails');
+      const rep = p.status === 'paired' ? paired.find((x) => x.classKey === r.classKey && x.index === p.partnerIndex)! : p;
+      expect(p.status === 'paired' ? rep.partnerStatus : p.status).toBe('fails');
+      if (p.status === 'paired') expect(rep.partnerIndex).toBe(r.index);
       // the exact confirmation of that failure agrees with it (a sweep stores only confirmed failures)
-      const plan = planClaim(compileClaimProgram(claim));
-      const cls = plan.classes().find((c) => c.key === partner.classKey)!;
-      expect(createEvaluator(compileClaimProgram(claim), { exact: false }).confirm(plan.instanceAt(cls, partner.index)).status).toBe('fails');
+      const cls = plan.classes().find((c) => c.key === r.classKey)!;
+      expect(createEvaluator(compileClaimProgram(claim), { exact: false }).confirm(plan.instanceAt(cls, r.index)).status).toBe('fails');
     }
+    // A zero left value is never a counterexample itself under nonzeroOnly (README, "Writing a claim").
+    expect(paired.every((x) => x.status !== 'fails' || x.left.text !== '0')).toBe(true);
     const stat = sweep(loadClaim(join(fixtures, 'custom-statistic.json')));
     expect(stat.some((r) => r.status === 'holds' && r.left.text.includes('t'))).toBe(true);
     expect(stat.every((r) => r.status !== 'fails')).toBe(true);
