@@ -30,7 +30,12 @@ export function staleBuildFiles(root: string): string[] {
 // Integration tests start worker threads and the CLI from dist/, so a stale build would test old code.
 // The build is done once by the npm script, before any test; this only refuses to go on without it.
 export default function setup(): void {
-  const stale = staleBuildFiles(process.cwd());
+  assertFreshBuild(process.cwd());
+}
+
+/** Throws a message naming `npm run build` when dist/ under `root` is missing or older than src/. */
+export function assertFreshBuild(root: string): void {
+  const stale = staleBuildFiles(root);
   if (stale.length === 0) return;
   const shown = stale.slice(0, 5).map((s) => `  src/${s}`).join('\n');
   const more = stale.length > 5 ? `\n  … and ${stale.length - 5} more` : '';
