@@ -1,7 +1,8 @@
-import { existsSync, realpathSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { copyFileSync, existsSync, mkdtempSync, realpathSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { AppError } from '../errors.js';
-import { mergeStores, openStore, type MergeReport, type Store } from '../store/index.js';
+import { isOlderSchema, mergeStores, openStore, type MergeReport, type Store } from '../store/index.js';
 
 /** Exit status of `merge` when it merged, but some shards are missing or unfinished. */
 export const INCOMPLETE_MERGE_EXIT = 4;
@@ -19,12 +20,26 @@ export function mergeStoreFiles(paths: readonly string[], into: string): MergeRe
   }
   const sources: { name: string; db: Store }[] = [];
   let target: Store | undefined;
+  let scratch: string | undefined;
   try {
-    for (const p of unique) sources.push({ name: p, db: openStore(p, { readonly: true }) });
+    for (const [k, p] of unique.entries()) {
+      let db = openStore(p, { readonly: true });
+      if (isOlderSchema(db)) {
+        // A store of an older schema is merged from a migrated copy; the file itself stays as it is.
+        db.close();
+        scratch ??= mkdtempSync(join(tmpdir(), 'puzzlesweep-merge-'));
+        const copy = join(scratch, `${k}.sqlite`);
+        copyFileSync(p, copy);
+        if (existsSync(`${p}-wal`)) copyFileSync(`${p}-wal`, `${copy}-wal`);
+        db = openStore(copy);
+      }
+      sources.push({ name: p, db });
+    }
     target = openStore(into);
     return mergeStores(target, into, sources);
   } finally {
     for (const s of sources) s.db.close();
     target?.close();
+    if (scratch) rmSync(scratch, { recursive: true, force: true });
   }
 }

@@ -20,11 +20,15 @@ export interface ShardReport {
   readonly repeated: readonly { readonly index: number; readonly stores: readonly string[] }[];
 }
 
-function schemaVersion(db: Store): number {
+/** The store's schema version (0: not a puzzlesweep store). */
+export function schemaVersion(db: Store): number {
   const has = db.prepare(`SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'schema_version'`).get();
   if (!has) return 0;
   return (db.prepare('SELECT MAX(version) AS v FROM schema_version').get() as { v: number | null }).v ?? 0;
 }
+
+/** Whether a store was written by an older schema (a merge migrates a copy of it first). */
+export const isOlderSchema = (db: Store) => schemaVersion(db) >= 1 && schemaVersion(db) < STORE_MIGRATIONS.length;
 
 /** Refuses sources this version cannot merge without loss: no store schema, or a newer one. */
 export function checkSchemas(sources: readonly MergeSource[]): void {

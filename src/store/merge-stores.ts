@@ -6,7 +6,7 @@ import type { Store } from './open-store.js';
 import { CoverMap } from './range-cover.js';
 import { markVerified } from './verified-class-records.js';
 
-export type { MergeSource, ShardReport } from './merge-checks.js';
+export { isOlderSchema, type MergeSource, type ShardReport } from './merge-checks.js';
 
 /** Two stores giving different results for the same thing; a merge with any conflict writes nothing. */
 export interface MergeConflict {
