@@ -55,7 +55,12 @@ export function readJsonFile(file: string, what: string): unknown {
   try {
     return JSON.parse(text) as unknown;
   } catch (e) {
-    throw new AppError('invalid_json', `${what}: expected valid JSON, received ${(e as Error).message}`, { file });
+    const message = (e as Error).message;
+    const where = jsonErrorPosition(text, message);
+    throw new AppError('invalid_json', `${what}: expected valid JSON, received ${message.replace(/ in JSON at position \d+.*$/, '')}`, {
+      file,
+      ...(where ? { path: `line ${where.line}, column ${where.column}` } : {}),
+    });
   }
 }
 
@@ -75,4 +80,13 @@ export function resolveTheory(nameOrPath: string): PieceSet {
 /** True when every piece weighs an integer, so values are integers rather than polynomials. */
 export function hasIntegerWeights(pieces: PieceSet): boolean {
   return pieces.pieces.every((p) => p.weight.type === 'integer');
+}
+
+/** Line and column (1-based) of a JSON.parse error, from the position its message names (or the end of the text). */
+export function jsonErrorPosition(text: string, message: string): { line: number; column: number } | undefined {
+  const m = / at position (\d+)/.exec(message);
+  const at = m ? Number(m[1]) : /Unexpected end of JSON input/.test(message) ? text.length : undefined;
+  if (at === undefined) return undefined;
+  const before = text.slice(0, at).split('\n');
+  return { line: before.length, column: before[before.length - 1]!.length + 1 };
 }

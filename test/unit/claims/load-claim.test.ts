@@ -46,7 +46,8 @@ describe('loadClaim', () => {
     'complement-needs-map.json': { code: 'invalid_claim', path: 'transform[1]', message: /labelMap, received labels a b/ },
     'too-many-permuted-variables.json': { code: 'invalid_claim', path: 'compare.relation.searchSpace', message: /at most 8 variables, received 9 at n=9/ },
     'bad-relation-type.json': { code: 'invalid_claim', path: 'compare.relation.type', message: /'equal' \|.*received "approximately"/ },
-    'not-json.json': { code: 'invalid_json', path: '', message: /^Claim file: expected valid JSON/ },
+    // The fixture breaks off after its one line, so the error points at the start of line 2 (the file's end).
+    'not-json.json': { code: 'invalid_json', path: 'line 2, column 1', message: /^Claim file: expected valid JSON/ },
   };
 
   it('has an expectation for every invalid fixture', () => {
