@@ -1,3 +1,4 @@
+import { readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { COMMANDS, invokedCommand } from '../../../src/cli/command-registry.js';
 
@@ -8,6 +9,11 @@ describe('command registry (lazy loading)', () => {
       expect({ command: m.command, describe: m.describe }).toEqual({ command: c.command, describe: c.describe });
     }
     expect(new Set(COMMANDS.map((c) => c.name)).size).toBe(COMMANDS.length);
+  });
+
+  it('has an entry for every command module (a new command is one registry line in src/cli/command-registry.ts)', () => {
+    const files = readdirSync(new URL('../../../src/cli/commands/', import.meta.url)).filter((f) => f.endsWith('-command.ts'));
+    expect(files.length).toBe(COMMANDS.length);
   });
 
   it('finds the invoked command as the first word that is not an option', () => {

@@ -1,0 +1,2 @@
+import yargs from 'yargs';
+import { hideBin } from 'yargs/helpers';
