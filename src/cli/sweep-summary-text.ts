@@ -1,3 +1,4 @@
+import { jsonInteger } from '../report/value-json.js';
 import type { ClaimSummary, SweepSummary } from '../run/sweep-summary.js';
 
 const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
@@ -5,12 +6,12 @@ const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
 function claimText(c: ClaimSummary): string[] {
   const lines = [
     `claim ${c.claimId} (${c.fingerprint.slice(0, 12)}), run ${c.runId}: ${c.status}${c.stopReason === 'finished' ? '' : ` (${c.stopReason.replace(/_/g, ' ')})`}`,
-    `  checked ${c.instancesChecked} instances in ${seconds(c.elapsedMs)}: ${c.holds} hold, ${c.newCounterexamples} new counterexamples` +
+    `  checked ${c.instancesChecked} instances in ${seconds(c.elapsedMs)}: ${c.holds} hold, ${c.newCounterexamples} new counterexample${c.newCounterexamples === 1 ? '' : 's'}` +
       (c.skippedZero ? `, ${c.skippedZero} skipped (value 0)` : '') +
       (c.paired ? `, ${c.paired} covered by their involution partner` : ''),
   ];
   if (c.method === 'modular' && c.instancesChecked > 0) lines.push(`  modular comparisons: chance of a false "holds" ≤ ${c.errorBound.toExponential(2)} (use --exact to avoid)`);
-  if (c.rechecked.checked) lines.push(`  re-checked ${c.rechecked.checked} stored counterexamples: ${c.rechecked.stillFail} still fail${c.rechecked.nowHold ? `, ${c.rechecked.nowHold} NOW HOLD (stored result doubtful)` : ''}`);
+  if (c.rechecked.checked) lines.push(`  re-checked ${c.rechecked.checked} stored counterexample${c.rechecked.checked === 1 ? '' : 's'}: ${c.rechecked.stillFail} still fail${c.rechecked.nowHold ? `, ${c.rechecked.nowHold} NOW HOLD (stored result doubtful)` : ''}`);
   if (c.overturned) lines.push(`  ${c.overturned} modular "fails" were overturned by exact recomputation`);
   lines.push('  classes:');
   for (const k of c.classes) {
@@ -26,13 +27,13 @@ function claimText(c: ClaimSummary): string[] {
       `  permutations found for ${c.permutations.instances} instances: ${c.permutations.distinct === 1 ? `the first one found is the same for all: [${c.permutations.common!.join(',')}]` : `the first one found takes ${c.permutations.distinct} values (an instance may have several; the class lines above list those serving a whole class)`}`,
     );
   }
-  if (c.counterexamples) lines.push(`  ${c.counterexamples} counterexamples stored`);
+  if (c.counterexamples) lines.push(`  ${c.counterexamples} counterexample${c.counterexamples === 1 ? '' : 's'} stored`);
   if (c.outcome === 'empty') lines.push('  the family has no instance within its bounds: nothing was checked, so nothing is shown to hold');
   if (c.remaining) {
     const r = c.remaining;
     const what = [
       r.classes.length ? `${r.instances} instances in ${r.classes.length} class${r.classes.length === 1 ? '' : 'es'} (${r.classes.slice(0, 4).join('; ')}${r.classes.length > 4 ? '; …' : ''})` : '',
-      r.rechecks ? `${r.rechecks} stored counterexamples to re-check` : '',
+      r.rechecks ? `${r.rechecks} stored counterexample${r.rechecks === 1 ? '' : 's'} to re-check` : '',
     ].filter(Boolean);
     if (what.length) lines.push(`  unfinished: ${what.join(', ')}; run the same command again to finish${c.stopReason === 'time_limit' ? ' (with a larger --time-limit, or none)' : ''}`);
   }
@@ -64,5 +65,11 @@ export function sweepSummaryText(s: SweepSummary): string {
 
 /** JSON text of any summary: bigints become decimal strings. */
 export function summaryJson(value: unknown): string {
-  return JSON.stringify(value, (_k, v: unknown) => (typeof v === 'bigint' ? v.toString() : v));
+  // Counts are JSON numbers while they are safe integers and decimal strings beyond 2^53 (README, "Exactness"):
+  // bigints, and the instance counts kept as decimal strings, follow that one rule.
+  return JSON.stringify(value, (k, v: unknown) => {
+    if (typeof v === 'bigint') return jsonInteger(v);
+    if ((k === 'instances' || k === 'done') && typeof v === 'string' && /^\d+$/.test(v)) return jsonInteger(BigInt(v));
+    return v;
+  });
 }

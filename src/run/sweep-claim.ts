@@ -34,6 +34,8 @@ export interface SweepProgress {
   readonly checked: number;
   readonly total: number;
   readonly counterexamples: number;
+  /** The class whose chunk finished last (e.g. `n=5`), absent before the first chunk. */
+  readonly classKey?: string;
 }
 
 /** What a claim's sweep needs from the invocation around it. */
@@ -95,7 +97,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
     });
     sched = s;
     const total = parts.reduce((acc, p) => acc + Math.max(0, Number(p.limit - p.first - doneInstances(db, claim.fingerprint, p.cls.key, method))), 0);
-    const progress = () => ctx.onProgress?.({ claimId: claim.id, checked: tally.checked, total, counterexamples: s.counterexamples });
+    const progress = (classKey?: string) => ctx.onProgress?.({ claimId: claim.id, checked: tally.checked, total, counterexamples: s.counterexamples, ...(classKey ? { classKey } : {}) });
     progress();
 
     const leasers = new Map<number, ChunkLeaser>();
@@ -138,7 +140,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
         tally.errorBound += r.errorBound;
         tally.exact &&= r.exact;
         s.completed(ci, { checked: r.checked, holds: r.holds, fails: r.fails, added, durationMs: r.durationMs });
-        progress();
+        progress(classKey);
       } catch (e) {
         releaseChunk(db, lease.chunkId);
         s.abandoned(ci);

@@ -32,9 +32,9 @@ describe('sweepSummaryText', () => {
   it('prints each count of the summary in its phrase, the first counterexample and its replay command', () => {
     const text = sweepSummaryText(summary);
     expect(text).toContain('claim demo (abcdef012345), run 3: completed');
-    expect(text).toContain('checked 12 instances in 1.5 s: 9 hold, 1 new counterexamples, 2 skipped (value 0)');
+    expect(text).toContain('checked 12 instances in 1.5 s: 9 hold, 1 new counterexample, 2 skipped (value 0)');
     expect(text).toMatch(/n=2 +sides 2,0,2,0,2,0 +64 instances {2}counterexample {2}\(12 checked now, 1 fail\)/);
-    expect(text).toContain('  1 counterexamples stored');
+    expect(text).toContain('  1 counterexample stored');
     expect(text).toContain('    left  (cohomology) sides 01 | - | 01 | - | 10 | -: 1');
     expect(text).toContain('    replay: puzzlesweep replay demo.json --instance n=2:5');
     expect(text.split('\n').at(-1)).toBe('result: a counterexample is known (2.0 s)');
