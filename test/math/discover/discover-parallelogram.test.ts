@@ -3,6 +3,7 @@ import type { ClaimInput } from '../../../src/claims/index.js';
 import { parseDiscoverInput } from '../../../src/discover/discover-input.js';
 import { runDiscover } from '../../../src/discover/run-discover.js';
 import { naiveCount } from '../../../src/reference/naive-count.js';
+import { applyBruteSteps } from '../../helpers/claim-steps.js';
 import { cohomologyPieces } from '../../unit/reference/puzzle-pieces.js';
 
 // The family of the issue's first check: (a,b,0,a,b,0) parallelograms, opposite sides of equal content.
@@ -24,8 +25,6 @@ function strings(length: number): string[] {
   return Array.from({ length: 2 ** length }, (_, k) => k.toString(2).padStart(length, '0'));
 }
 const ones = (s: string) => [...s].filter((c) => c === '1').length;
-const rev = (s: string) => [...s].reverse().join('');
-const flip = (s: string) => [...s].map((c) => (c === '0' ? '1' : '0')).join('');
 
 function boundaries(a: number, b: number): string[][] {
   const out: string[][] = [];
@@ -33,32 +32,6 @@ function boundaries(a: number, b: number): string[][] {
     if (ones(s1) === ones(s4) && ones(s2) === ones(s5)) out.push([s1, s2, '', s4, s5, '']);
   }
   return out;
-}
-
-// The steps as README defines them ("Writing a claim"), written out again here.
-type Step = ClaimInput['transform'][number];
-function applyStep(step: Step, sides: string[]): string[] {
-  const list = (s: 'all' | number[] | undefined) => (s === undefined || s === 'all' ? [1, 2, 3, 4, 5, 6] : s);
-  switch (step.type) {
-    case 'rotate': {
-      const k = (((step.degrees / 60) % 6) + 6) % 6;
-      return sides.map((_, i) => sides[(i - k + 6) % 6]!);
-    }
-    case 'mirror':
-      return [2, 1, 0, 5, 4, 3].map((i) => rev(sides[i]!));
-    case 'complement':
-      return sides.map((s, i) => (list(step.sides).includes(i + 1) ? flip(s) : s));
-    case 'reverse':
-      return sides.map((s, i) => (list(step.sides).includes(i + 1) ? rev(s) : s));
-    case 'exchange': {
-      const out = [...sides];
-      const [i, j] = [step.sides[0] - 1, step.sides[1] - 1];
-      [out[i], out[j]] = [sides[j]!, sides[i]!];
-      return out;
-    }
-    default:
-      throw new Error(`step ${step.type} is not in discover's space`);
-  }
 }
 
 const values = new Map<string, bigint>();
@@ -79,7 +52,7 @@ const classes = [1, 2, 3].flatMap((a) => [1, 2, 3].map((b) => ({ a, b }))).sort(
 function bruteForce(claim: ClaimInput): string | undefined {
   for (const { a, b } of classes) {
     for (const sides of boundaries(a, b)) {
-      const t = claim.transform.reduce((s, step) => applyStep(step, s), sides);
+      const t = applyBruteSteps(claim.transform, sides);
       if (value(sides) !== value(t)) return `a=${a},b=${b}`;
     }
   }
@@ -107,7 +80,7 @@ describe('discover on (a,b,0,a,b,0) parallelograms in cohomology, a, b ≤ 3', (
     for (const d of result.dropped) {
       expect(bruteForce(d.claim), d.claim.id).toBe(d.counterexample.classKey);
       // The reported counterexample is one: its two values, recomputed naively, differ as reported.
-      const t = d.claim.transform.reduce((s, step) => applyStep(step, s), [...d.counterexample.left.sides]);
+      const t = applyBruteSteps(d.claim.transform, d.counterexample.left.sides);
       expect(t).toEqual(d.counterexample.right.sides);
       expect(value([...d.counterexample.left.sides]).toString()).toBe(d.counterexample.left.value);
       expect(value(t).toString()).toBe(d.counterexample.right.value);
@@ -116,7 +89,7 @@ describe('discover on (a,b,0,a,b,0) parallelograms in cohomology, a, b ≤ 3', (
 
   it('counts its evidence as the brute force does: every boundary of the family, and those of nonzero value', () => {
     const all = classes.flatMap(({ a, b }) => boundaries(a, b));
-    const nonzero = all.filter((s) => value(s) !== 0n || value(applyStep({ type: 'exchange', sides: [1, 4] }, s)) !== 0n).length;
+    const nonzero = all.filter((s) => value(s) !== 0n || value(applyBruteSteps([{ type: 'exchange', sides: [1, 4] }], s)) !== 0n).length;
     const exchange = result.survivors.find((s) => s.claim.id === 'para-cohomology-exchange-1-4')!;
     expect(exchange.evidence.instances).toBe(all.length);
     expect(exchange.evidence.nonzeroInstances).toBe(nonzero);
