@@ -1,0 +1,47 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { runCommand } from '../../../src/cli/run-command.js';
+import { AppError } from '../../../src/errors.js';
+
+function capture() {
+  const out: string[] = [];
+  const err: string[] = [];
+  vi.spyOn(process.stdout, 'write').mockImplementation((s) => (out.push(String(s)), true));
+  vi.spyOn(process.stderr, 'write').mockImplementation((s) => (err.push(String(s)), true));
+  return { out, err };
+}
+
+// process.exitCode is global: put it back so no other test (or the runner) sees ours.
+afterEach(() => {
+  vi.restoreAllMocks();
+  process.exitCode = undefined;
+});
+
+describe('runCommand (the CLI edge)', () => {
+  it('turns the body’s number into the exit status', async () => {
+    await runCommand(false, () => 1);
+    expect(process.exitCode).toBe(1);
+  });
+
+  it('prints a coded error, as JSON too with --json, and exits 2 for bad input (README, "Exit codes")', async () => {
+    const { out, err } = capture();
+    await runCommand(true, () => {
+      throw new AppError('invalid_argument', '--workers: expected a positive integer, received 0', { path: '--workers' });
+    });
+    const exit = process.exitCode;
+    vi.restoreAllMocks();
+    expect(exit).toBe(2);
+    expect(JSON.parse(out.join(''))).toMatchObject({ error: { code: 'invalid_argument', path: '--workers' } });
+    expect(err.join('')).toContain('✖ --workers: expected a positive integer, received 0\n  → at --workers');
+  });
+
+  it('reports anything else as an internal error with exit 3', async () => {
+    const { err } = capture();
+    await runCommand(false, async () => {
+      throw new TypeError('oops');
+    });
+    const exit = process.exitCode;
+    vi.restoreAllMocks();
+    expect(exit).toBe(3);
+    expect(err.join('')).toContain('[internal_error]');
+  });
+});
