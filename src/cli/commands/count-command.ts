@@ -2,7 +2,8 @@ import type { CommandModule } from 'yargs';
 import { resolveTheory } from '../../claims/resolve-theory.js';
 import { generatingSemiring } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
-import { countRegion } from '../../claims/count-region.js';
+import { countRegion, regionOfSides } from '../../claims/count-region.js';
+import { announceLargeRegion } from '../size-notice.js';
 import { parseBoundary, triangleEchoJson, triangleEchoLines } from '../boundary-args.js';
 import { classOptions, formOption } from '../class-options.js';
 import type { ValueForm } from '../../report/root-form.js';
@@ -34,6 +35,7 @@ export const countCommand: CommandModule<object, CountArgs> = {
     runCommand(args.json, () => {
       const pieces = resolveTheory(args.theory);
       const { sides, triangle } = parseBoundary(args);
+      announceLargeRegion(regionOfSides(sides), `counting in ${pieces.name}`);
       const result = countRegion(pieces, sides, { completed: args.completed, ...(args.statistic !== undefined ? { statistic: args.statistic } : {}) });
       if (args.json) {
         process.stdout.write(`${JSON.stringify(countJson(result, args.form, triangle ? triangleEchoJson(triangle) : {}))}\n`);

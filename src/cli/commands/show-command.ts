@@ -8,6 +8,7 @@ import { regionOfSides } from '../../claims/count-region.js';
 import { toAppError } from '../../errors.js';
 import { parseBoundary, triangleEchoLines } from '../boundary-args.js';
 import { classOptions } from '../class-options.js';
+import { announceLargeRegion } from '../size-notice.js';
 import { runCommand } from '../run-command.js';
 import { writeOutputFile } from '../write-output-file.js';
 
@@ -40,7 +41,9 @@ export const showCommand: CommandModule<object, ShowArgs> = {
       const { sides, triangle } = parseBoundary(args);
       const region = regionOfSides(sides);
       // The total comes from the counting sweep first, so a large boundary announces its size before drawing.
+      announceLargeRegion(region, `counting the puzzles in ${pieces.name}`);
       const total = totalPuzzles(region, sides, pieces);
+      if (BigInt(total) > BigInt(args.limit)) process.stderr.write(`${total} puzzles; drawing the first ${args.limit} (--limit)…\n`);
       if (triangle) process.stdout.write(`${triangleEchoLines(triangle).join('\n')}\n`);
       if (args.svg === undefined && args.tikz === undefined) return printText(region, sides, pieces, args.limit, total);
       const { puzzles, more } = collect(region, sides, pieces, args.limit);
