@@ -4,6 +4,7 @@ import { createEvaluator, parseClaim, planClaim } from '../../../src/claims/inde
 import { countBoundary, makeRegion, polyEquals, polynomialSemiring, substitutePoly, theoryPieceSet } from '../../../src/engine/index.js';
 import { allPermutations, blockReversals, isInvolution, permutationKey, substitutionFor } from '../../../src/claims/substitution.js';
 import type { SubstitutionStep } from '../../../src/claims/claim-schema.js';
+import { expectDeterministicEnumeration } from '../../helpers/contracts.js';
 
 // Every expected permutation below is worked out by hand from the step definitions in the claim schema
 // (y_m ↦ y_σ(m), listed as the images σ(1..M)); "by hand" means no source beyond those definitions.
@@ -90,9 +91,9 @@ describe('permutation search spaces', () => {
     ]);
   });
 
-  it('allPermutations(5) has 5! = 120 distinct entries (common practice, no source)', () => {
-    const keys = new Set([...allPermutations(5)].map(permutationKey));
-    expect(keys.size).toBe(120);
+  it('enumerates deterministically without repeats: 5! = 120 permutations, 1 + C(5,2) = 11 block reversals (common practice, no source)', () => {
+    expect(expectDeterministicEnumeration(() => allPermutations(5), permutationKey)).toHaveLength(120);
+    expect(expectDeterministicEnumeration(() => blockReversals(5), permutationKey)).toHaveLength(11);
   });
 });
 
