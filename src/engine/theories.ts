@@ -1,7 +1,7 @@
 import { EngineError } from './engine-error.js';
 import { buildPieceSet, type PieceSet, type PieceSpec } from './piece-set.js';
 
-export const BUILTIN_THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'] as const;
+export const BUILTIN_THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'] as const;
 export type BuiltinTheory = (typeof BUILTIN_THEORIES)[number];
 
 /** Internal label of the horizontal edge inside the equivariant rhombus. */
@@ -29,6 +29,9 @@ const SPECS: Record<BuiltinTheory, PieceSpec[]> = {
   equivariant: [...COHOMOLOGY, ...EQUIVARIANT_RHOMBUS],
   'k-theory': [...COHOMOLOGY, K_UP],
   'dual-k-theory': [...COHOMOLOGY, K_DOWN],
+  // Segre–Schwartz–MacPherson classes of Schubert cells at y = 0: both K-triangles, each weighing −1
+  // (Knutson–Zinn-Justin 2021); checked against localization at y = 0 on every triple with n ≤ 6.
+  'ssm-nonequivariant': [...COHOMOLOGY, K_UP, K_DOWN],
 };
 
 const cache = new Map<BuiltinTheory, PieceSet>();

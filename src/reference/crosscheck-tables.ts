@@ -3,18 +3,19 @@ import { dualKTable } from './dual-k.js';
 import { grothendieckTable } from './grothendieck.js';
 import { localizationTable } from './localization.js';
 import { lrTable } from './lr-rule.js';
+import { schwartzMacPhersonAtZero } from './ssm-at-zero.js';
 import { toTerms, type PolynomialTerm } from './ref-polynomial.js';
 import { ReferenceComputationError } from './reference-error.js';
 
 /** The four theories the reference tables cover. */
-export type ReferenceTheory = 'cohomology' | 'equivariant' | 'k-theory' | 'dual-k-theory';
+export type ReferenceTheory = 'cohomology' | 'equivariant' | 'k-theory' | 'dual-k-theory' | 'ssm-nonequivariant';
 
 /** One reference value: its terms in y_1..y_n (exponent vectors of length n), canonically sorted. */
 export interface ReferenceValue {
   terms: PolynomialTerm[];
 }
 
-const THEORIES: readonly ReferenceTheory[] = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'];
+const THEORIES: readonly ReferenceTheory[] = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'];
 
 function integerValue(c: bigint, n: number): ReferenceValue {
   return { terms: c === 0n ? [] : [{ coefficient: c, exponents: new Array<number>(n).fill(0) }] };
@@ -34,7 +35,14 @@ export function referenceTable(theory: ReferenceTheory, k: number, n: number): M
     for (const [key, p] of localizationTable(k, n)) out.set(key, { terms: toTerms(p, n) });
     return out;
   }
-  const table = theory === 'cohomology' ? lrTable(k, n) : theory === 'k-theory' ? grothendieckTable(k, n) : dualKTable(k, n);
+  const table =
+    theory === 'cohomology'
+      ? lrTable(k, n)
+      : theory === 'k-theory'
+        ? grothendieckTable(k, n)
+        : theory === 'ssm-nonequivariant'
+          ? schwartzMacPhersonAtZero('ssm', k, n)
+          : dualKTable(k, n);
   for (const [key, c] of table) if (c !== 0n) out.set(key, integerValue(c, n));
   return out;
 }

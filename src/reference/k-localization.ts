@@ -75,7 +75,8 @@ export function kRestrictionTable(k: number, n: number): Map<string, Map<string,
  * Structure constants c_{λμ}^ν(t) of [O_λ]·[O_μ] = Σ_ν c_{λμ}^ν [O_ν] in K_T(Gr(k, n)), keyed `${λ},${μ},${ν}`
  * (zero values omitted), by the triangular solve at the fixed points in increasing codimension.
  */
-export function kLocalizationTable(k: number, n: number): Map<string, RefLaurent> {
+/** With `only`, just the products of that one pair (λ, μ). */
+export function kLocalizationTable(k: number, n: number, only?: readonly [string, string]): Map<string, RefLaurent> {
   const strings = grassmannianStrings(k, n);
   const res = kRestrictionTable(k, n);
   const at = (lam: string, w: string): RefLaurent | undefined => res.get(lam)!.get(w);
@@ -83,6 +84,7 @@ export function kLocalizationTable(k: number, n: number): Map<string, RefLaurent
   strings.forEach((lam, li) => {
     for (let mi = li; mi < strings.length; mi++) {
       const mu = strings[mi]!;
+      if (only && !((only[0] === lam && only[1] === mu) || (only[0] === mu && only[1] === lam))) continue;
       const found: Array<[string, RefLaurent]> = [];
       for (const w of strings) {
         const lw = at(lam, w);

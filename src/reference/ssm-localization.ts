@@ -86,7 +86,8 @@ export type SchwartzMacPherson = 'ssm' | 'csm';
  * increasing codimension; at w, s_SM(X_ν°)|_w = c_SM(X_ν°)|_w / Π_{tangent χ}(1 + χ), and c_SM(X_w°)|_w is the
  * normal product times the cell factors, so each step divides by a polynomial and adds known factors.
  */
-export function schwartzMacPhersonTable(kind: SchwartzMacPherson, k: number, n: number): Map<string, RefFraction> {
+/** With `only`, just the products of that one pair (λ, μ). */
+export function schwartzMacPhersonTable(kind: SchwartzMacPherson, k: number, n: number, only?: readonly [string, string]): Map<string, RefFraction> {
   const strings = grassmannianStrings(k, n);
   const res = csmRestrictionTable(k, n);
   const at = (lam: string, w: string): RefPolynomial | undefined => res.get(lam)!.get(w);
@@ -94,6 +95,7 @@ export function schwartzMacPhersonTable(kind: SchwartzMacPherson, k: number, n: 
   strings.forEach((lam, li) => {
     for (let mi = li; mi < strings.length; mi++) {
       const mu = strings[mi]!;
+      if (only && !((only[0] === lam && only[1] === mu) || (only[0] === mu && only[1] === lam))) continue;
       const found: Array<[string, RefFraction]> = [];
       for (const w of strings) {
         const lw = at(lam, w);

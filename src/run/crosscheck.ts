@@ -1,5 +1,11 @@
 import {
   countCompletions,
+  fractionEquals,
+  fractionOf,
+  fractionSemiring,
+  fractionText,
+  valueRing,
+  type Fraction,
   integerSemiring,
   polynomialSemiring,
   polyTerms,
@@ -8,11 +14,13 @@ import {
   type PieceSet,
   type Term,
 } from '../engine/index.js';
+import { AppError } from '../errors.js';
 import { grassmannianStrings } from '../reference/grassmannian-strings.js';
+import { isLocalizationTheory, localizationLetter, localizationValues, type LocalizationTheory } from './localization-values.js';
 import { referenceTable, type ReferenceTheory } from '../reference/crosscheck-tables.js';
 
 export interface CrosscheckOptions {
-  readonly theory: ReferenceTheory;
+  readonly theory: ReferenceTheory | LocalizationTheory;
   readonly maxN: number;
   /** Checks this piece set against the theory's reference instead of the built-in one (e.g. a custom set). */
   readonly pieces?: PieceSet;
@@ -36,7 +44,7 @@ export interface Disagreement {
 }
 
 export interface CrosscheckSummary {
-  readonly theory: ReferenceTheory;
+  readonly theory: ReferenceTheory | LocalizationTheory;
   readonly maxN: number;
   readonly rows: readonly CrosscheckRow[];
   readonly triples: number;
@@ -71,10 +79,31 @@ function engineProducts(theory: ReferenceTheory, pieces: PieceSet, lambda: strin
   return out;
 }
 
+// A theory known by localization only: the given piece set's exact fractions against the localization values.
+function fractionProducts(pieces: PieceSet, lambda: string, mu: string): Map<string, Fraction> {
+  const n = lambda.length;
+  const out = new Map<string, Fraction>();
+  const ring = fractionSemiring(n, valueRing(pieces).letter);
+  for (const [side5, v] of countCompletions(triangleRegion(n), [lambda, '', mu, '', null, ''], pieces, { semiring: ring })) {
+    out.set([...side5].reverse().join(''), v);
+  }
+  return out;
+}
+
 /** Compares the engine with the independent reference on every triple of every Gr(k, n), n ≤ maxN. */
 export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
   const started = performance.now();
-  const pieces = options.pieces ?? theoryPieceSet(options.theory);
+  const theory = options.theory;
+  if (isLocalizationTheory(theory)) {
+    if (!options.pieces) {
+      throw new AppError('invalid_argument', `--pieces: expected a piece-set file to check against ${theory}, received none`, {
+        path: '--pieces',
+        hint: `no puzzle rule for ${theory} is built in; the reference is localization`,
+      });
+    }
+    return crosscheckFractions(theory, options.pieces, options, started);
+  }
+  const pieces = options.pieces ?? theoryPieceSet(theory);
   const grassmannians: [number, number, string[]][] = [];
   for (let n = 1; n <= options.maxN; n++) for (let k = 0; k <= n; k++) grassmannians.push([n, k, grassmannianStrings(k, n)]);
   const total = grassmannians.reduce((s, [, , strings]) => s + strings.length ** 2, 0);
@@ -82,12 +111,12 @@ export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
   let firstDisagreement: Disagreement | undefined;
   const rows: CrosscheckRow[] = [];
   for (const [n, k, strings] of grassmannians) {
-    const reference = referenceTable(options.theory, k, n);
+    const reference = referenceTable(theory, k, n);
     let triples = 0;
     let agreements = 0;
     for (const lambda of strings) {
       for (const mu of strings) {
-        const engine = engineProducts(options.theory, pieces, lambda, mu);
+        const engine = engineProducts(theory, pieces, lambda, mu);
         for (const nu of strings) {
           triples++;
           const e = canonical(engine.get(nu) ?? []);
@@ -102,6 +131,45 @@ export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
   }
   return {
     theory: options.theory,
+    maxN: options.maxN,
+    rows,
+    triples: rows.reduce((s, r) => s + r.triples, 0),
+    agreements: rows.reduce((s, r) => s + r.agreements, 0),
+    firstDisagreement,
+    seconds: (performance.now() - started) / 1000,
+  };
+}
+
+function crosscheckFractions(theory: LocalizationTheory, pieces: PieceSet, options: CrosscheckOptions, started: number): CrosscheckSummary {
+  const letter = localizationLetter(theory);
+  const names = (k: number) => `${letter}${k + 1}`;
+  const grassmannians: [number, number, string[]][] = [];
+  for (let n = 1; n <= options.maxN; n++) for (let k = 0; k <= n; k++) grassmannians.push([n, k, grassmannianStrings(k, n)]);
+  const total = grassmannians.reduce((s, [, , strings]) => s + strings.length ** 2, 0);
+  let done = 0;
+  let firstDisagreement: Disagreement | undefined;
+  const rows: CrosscheckRow[] = [];
+  for (const [n, k, strings] of grassmannians) {
+    const reference = localizationValues(theory, k, n);
+    let triples = 0;
+    let agreements = 0;
+    for (const lambda of strings) {
+      for (const mu of strings) {
+        const engine = fractionProducts(pieces, lambda, mu);
+        for (const nu of strings) {
+          triples++;
+          const e = engine.get(nu) ?? fractionOf(new Map());
+          const r = reference.get(`${lambda},${mu},${nu}`) ?? fractionOf(new Map());
+          if (fractionEquals(e, r)) agreements++;
+          else firstDisagreement ??= { lambda, mu, nu, engine: fractionText(e, names), reference: fractionText(r, names) };
+        }
+        options.onProgress?.(++done, total);
+      }
+    }
+    rows.push({ n, k, triples, agreements });
+  }
+  return {
+    theory,
     maxN: options.maxN,
     rows,
     triples: rows.reduce((s, r) => s + r.triples, 0),

@@ -8,6 +8,30 @@ import { parseBoundary, triangleEchoJson, triangleEchoLines } from '../boundary-
 import { classOptions, formOption } from '../class-options.js';
 import type { ValueForm } from '../../report/root-form.js';
 import { runCommand } from '../run-command.js';
+import { AppError } from '../../errors.js';
+import { isLocalizationTheory, localizationLetter, localizationValue, type LocalizationTheory } from '../../run/localization-values.js';
+import { JSON_FORMAT_VERSION, valueJson } from '../../report/value-json.js';
+import type { RegionValue } from '../../claims/count-region.js';
+
+// Theories without a built-in puzzle rule: the structure constant of a triangle, computed by localization.
+function countByLocalization(theory: LocalizationTheory, args: CountArgs): void {
+  const { triangle } = parseBoundary(args);
+  if (!triangle || triangle.strings.length !== 3 || args.sides !== undefined || args.completed || args.statistic !== undefined) {
+    throw new AppError('invalid_argument', `--theory ${theory}: expected a structure constant --triangle λ,μ,ν (or --partitions), received another boundary or option`, {
+      path: '--theory',
+      hint: 'no puzzle rule for this theory agrees with localization yet, so only triangles are computed, by localization (README, "Theories")',
+    });
+  }
+  const [lambda, mu, nu] = triangle.strings as [string, string, string];
+  const n = lambda.length;
+  const value: RegionValue = { type: 'fraction', value: localizationValue(theory, lambda, mu, nu), size: n, letter: localizationLetter(theory), variableNames: [] };
+  if (args.json) {
+    process.stdout.write(`${JSON.stringify({ formatVersion: JSON_FORMAT_VERSION, theory, ...triangleEchoJson(triangle), source: 'localization', puzzles: null, value: valueJson(value) })}\n`);
+    return;
+  }
+  const lines = [`theory:  ${theory} (by localization: no puzzle rule is built in)`, ...triangleEchoLines(triangle), `value:   ${valueText(value)}`];
+  process.stdout.write(`${lines.join('\n')}\n`);
+}
 
 interface CountArgs {
   theory: string;
@@ -26,13 +50,17 @@ export const countCommand: CommandModule<object, CountArgs> = {
   describe: 'Print the value of one boundary (the sum over its puzzles of the product of piece weights)',
   builder: (y) =>
     formOption(classOptions(y, 'λ,μ,ν'))
-      .option('theory', { type: 'string', demandOption: true, describe: "cohomology | equivariant | k-theory | dual-k-theory | path to a piece-set JSON" })
+      .option('theory', { type: 'string', demandOption: true, describe: "cohomology | equivariant | k-theory | dual-k-theory | ssm-nonequivariant | path to a piece-set JSON; triangles only: equivariant-k-theory | ssm | ssm-chern" })
       .option('sides', { type: 'string', describe: "six clockwise side strings s1,…,s6; an empty side is '' or '-'" })
       .option('completed', { type: 'boolean', default: false, describe: 'count the completed triangle instead of the region itself' })
       .option('statistic', { type: 'string', describe: 'also count puzzles by their number of pieces of this kind (e.g. k-piece, equivariant)' })
       .option('json', { type: 'boolean', default: false, describe: 'print one JSON object' }) as never,
   handler: (args) =>
     runCommand(args.json, () => {
+      if (isLocalizationTheory(args.theory)) {
+        countByLocalization(args.theory, args);
+        return;
+      }
       const pieces = resolveTheory(args.theory);
       const { sides, triangle } = parseBoundary(args);
       announceLargeRegion(regionOfSides(sides), `counting in ${pieces.name}`);

@@ -4,12 +4,13 @@ import { resolveTheory } from '../../claims/resolve-theory.js';
 import { AppError } from '../../errors.js';
 import { crosscheck, type CrosscheckSummary } from '../../run/crosscheck.js';
 import type { ReferenceTheory } from '../../reference/crosscheck-tables.js';
+import type { LocalizationTheory } from '../../run/localization-values.js';
 import { runCommand } from '../run-command.js';
 
-const THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'] as const;
+const THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant', 'equivariant-k-theory', 'ssm', 'ssm-chern'] as const;
 
 interface CrosscheckArgs {
-  theory: ReferenceTheory;
+  theory: ReferenceTheory | LocalizationTheory;
   'max-n': number;
   pieces?: string;
   json: boolean;
@@ -29,7 +30,7 @@ function summaryText(s: CrosscheckSummary): string {
 
 export const crosscheckCommand: CommandModule<object, CrosscheckArgs> = {
   command: 'crosscheck',
-  describe: 'Compare the engine with independent computations (LR rule, localization, Grothendieck polynomials, Möbius inversion)',
+  describe: 'Compare the engine with independent computations (LR rule, localization, Grothendieck polynomials, Möbius inversion); equivariant-k-theory, ssm and ssm-chern need --pieces',
   builder: (y) =>
     y
       .option('theory', { choices: THEORIES, demandOption: true, describe: 'which structure constants to check' })

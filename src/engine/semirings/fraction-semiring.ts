@@ -137,11 +137,27 @@ export function fractionTerms(a: Fraction, nvars: number): Term[] | undefined {
   return polyTerms(a.num, nvars).map((t) => ({ coefficient: t.coefficient, exponents: t.exponents.map((e, i) => e - (a.low[i] ?? 0)) }));
 }
 
+/** Text: Laurent polynomials with negative exponents (`t2*t3^-1`), other quotients with each denominator factor apart. */
 export function fractionText(a: Fraction, names: (k: number) => string): string {
-  const num = polyText(a.num, names);
-  if (a.low.length === 0 && a.atoms.size === 0) return num;
-  const den = polyText(fractionDenominator(a), names);
-  return `(${num}) / (${den})`;
+  if (a.atoms.size === 0) {
+    if (a.low.length === 0) return polyText(a.num, names);
+    return laurentText(a, names);
+  }
+  const mono = a.low.flatMap((e, k) => (e === 0 ? [] : [e === 1 ? names(k) : `${names(k)}^${e}`]));
+  const atoms = [...a.atoms.values()].map((v) => `(${polyText(v.poly, names)})${v.exp > 1 ? `^${v.exp}` : ''}`);
+  return `(${polyText(a.num, names)}) / ${[...mono, ...atoms].join('*')}`;
+}
+
+function laurentText(a: Fraction, names: (k: number) => string): string {
+  const terms = polyTerms(a.num, a.low.length).map((t) => ({ c: t.coefficient, e: t.exponents.map((x, i) => x - (a.low[i] ?? 0)) }));
+  return terms
+    .map((t, idx) => {
+      const vars = t.e.flatMap((e, k) => (e === 0 ? [] : [e === 1 ? names(k) : `${names(k)}^${e}`]));
+      const abs = t.c < 0n ? -t.c : t.c;
+      const body = vars.length === 0 ? abs.toString() : abs === 1n ? vars.join('*') : `${abs}*${vars.join('*')}`;
+      return (t.c < 0n ? (idx === 0 ? '-' : ' - ') : idx === 0 ? '' : ' + ') + body;
+    })
+    .join('');
 }
 
 export interface FractionSemiring extends Semiring<Fraction> {

@@ -77,7 +77,7 @@ describe('DP = naive backtracking on every boundary with N ≤ 4', () => {
   it.each(['conjectures/pieces/quotient-weights-demo.json', 'conjectures/pieces/laurent-weights-demo.json'])('formula weights: %s', (file) => {
     expect(compareFractions(file, 4)).toBe(28224);
   });
-  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'])('%s', (theory) => {
+  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'])('%s', (theory) => {
     expect(compare(theory, 4)).toBe(28224);
   });
   it('a custom piece set with a named variable', () => {

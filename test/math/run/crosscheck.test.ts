@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { crosscheck } from '../../../src/run/crosscheck.js';
+import { resolveTheory } from '../../../src/claims/resolve-theory.js';
 import { tripleCount } from '../../helpers/grassmannian-counts.js';
 
 describe('engine against independent references', () => {
@@ -26,5 +27,18 @@ describe('engine against independent references', () => {
     const s = crosscheck({ theory: 'dual-k-theory', maxN: 7 });
     expect(s.triples).toBe(tripleCount(7));
     expect(s.firstDisagreement).toBeUndefined();
+  });
+
+  it('non-equivariant SSM: both K-triangles (−1 each) = localization at y = 0 on every triple with n ≤ 6 [Knutson–Zinn-Justin 2021; Aluffi–Mihalcea, Compositio 2016]', () => {
+    const s = crosscheck({ theory: 'ssm-nonequivariant', maxN: 6 });
+    expect(s.triples).toBe(tripleCount(6));
+    expect(s.firstDisagreement).toBeUndefined();
+  });
+
+  it('a custom Laurent piece set is checked against equivariant K-theory by localization, and a wrong one is caught', () => {
+    // c_{010,010}^{100} = t2/t3 by localization (isobaric divided differences), while this demo set gives 1.
+    const s = crosscheck({ theory: 'equivariant-k-theory', maxN: 4, pieces: resolveTheory('conjectures/pieces/laurent-weights-demo.json') });
+    expect(s.agreements).toBeLessThan(s.triples);
+    expect(s.firstDisagreement).toMatchObject({ lambda: '010', mu: '010', nu: '100', reference: 't2*t3^-1' });
   });
 });
