@@ -5,6 +5,7 @@ import { structureTable } from '../../../src/products/parallel-table.js';
 import { stringOfPartition, parsePartition } from '../../../src/products/partition-strings.js';
 import { referenceTable, type ReferenceTheory } from '../../../src/reference/crosscheck-tables.js';
 import type { RegionValue } from '../../../src/claims/count-region.js';
+import { isRootPositive } from '../../../src/report/root-form.js';
 
 type Terms = readonly { coefficient: bigint; exponents: readonly number[] }[];
 const canonical = (terms: Terms) =>
@@ -45,6 +46,14 @@ describe('table and expand against the independent references', () => {
 
   it('equivariant: every Gr(k, n) with n ≤ 5', async () => {
     for (const [k, n] of grassmannians(5)) await compareTable('equivariant', k, n);
+  });
+
+  it('equivariant values are positive in z_m = y_{m+1} − y_m, so --form roots applies to each (Graham, Duke Math. J. 2001)', async () => {
+    for (const [k, n] of grassmannians(5)) {
+      for (const r of await structureTable(theoryPieceSet('equivariant'), { k, n }, { workers: 1 })) {
+        if (r.value.type === 'polynomial') expect(isRootPositive(r.value.value, n), `${r.lambda},${r.mu},${r.nu}`).toBe(true);
+      }
+    }
   });
 
   it('expand via partitions: c_{21,21}^{321} = 2 in Gr(3,6)', () => {
