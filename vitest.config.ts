@@ -18,7 +18,15 @@ export default defineConfig({
           testTimeout: 120_000,
         },
       },
-      { test: { name: 'math', include: ['test/math/**/*.test.ts'], testTimeout: 600_000 } },
+      {
+        test: {
+          name: 'math',
+          include: ['test/math/**/*.test.ts'],
+          // Exhaustive but in-process: no workers (they would run dist/), processes or SQLite files either.
+          setupFiles: ['test/setup/unit-is-pure.ts'],
+          testTimeout: 600_000,
+        },
+      },
       {
         test: {
           name: 'integration',

@@ -3,10 +3,11 @@ import { syncBuiltinESMExports } from 'node:module';
 import workerThreads from 'node:worker_threads';
 import { vi } from 'vitest';
 
-// test/unit is the quick loop: no child processes, no worker threads, no SQLite files (`:memory:` is fine).
+// test/unit (the quick loop) and test/math (in-process cross-checks): no child processes, no worker threads,
+// no SQLite files (`:memory:` is fine).
 // These stand-ins make a unit test that reaches for one fail at once, naming where the test belongs.
 function refuse(what: string): never {
-  throw new Error(`Unit test: expected no ${what}, received a call to it; hint: move the test to test/integration`);
+  throw new Error(`Unit or math test: expected no ${what}, received a call to it; hint: move the test to test/integration`);
 }
 
 const processFunctions = ['spawn', 'spawnSync', 'exec', 'execSync', 'execFile', 'execFileSync', 'fork'] as const;
