@@ -25,7 +25,20 @@ function clusterUp(): { up: boolean; why: string } {
 }
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
-const squeue = (...args: string[]) => execFileSync('squeue', ['-h', ...args], { encoding: 'utf8' }).trim();
+/** Runs one of the generated scripts; a failure carries its output. */
+function bash(script: string): string {
+  const r = spawnSync('bash', [script], { encoding: 'utf8' });
+  if (r.status !== 0) throw new Error(`${script} exited ${r.status}:\n${r.stdout}${r.stderr}`);
+  return r.stdout;
+}
+// squeue may time out while slurmctld is busy on a loaded machine: try again a few times.
+function squeue(...args: string[]): string {
+  for (let attempt = 1; ; attempt++) {
+    const r = spawnSync('squeue', ['-h', ...args], { encoding: 'utf8' });
+    if (r.status === 0) return r.stdout.trim();
+    if (attempt === 5) throw new Error(`squeue ${args.join(' ')} failed: ${r.stderr}`);
+  }
+}
 
 /** Waits until the job leaves the queue, polling squeue (sbatch --wait polls with long back-off). */
 async function waitGone(jobId: string, limitMs = 150_000): Promise<void> {
@@ -96,7 +109,7 @@ describe('sharded sweep on a real Slurm cluster', () => {
       const damaged = join(out, 'stores', `shard-${FAILING}-of-${SHARDS}.sqlite`);
       writeFileSync(damaged, 'not a database');
 
-      execFileSync('bash', [join(out, 'submit.sh')], { encoding: 'utf8' });
+      bash(join(out, 'submit.sh'));
       const first = jobIds(out);
       submitted.push(first.array, first.merge);
       await waitGone(first.array);
@@ -108,7 +121,7 @@ describe('sharded sweep on a real Slurm cluster', () => {
       expect(existsSync(join(out, 'merged.sqlite'))).toBe(false);
 
       unlinkSync(damaged);
-      const again = execFileSync('bash', [join(out, 'resubmit-failed.sh')], { encoding: 'utf8' });
+      const again = bash(join(out, 'resubmit-failed.sh'));
       expect(again).toContain(`resubmitted shards ${FAILING} `);
       const second = jobIds(out);
       submitted.push(second.array, second.merge);
