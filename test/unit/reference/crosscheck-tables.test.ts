@@ -27,6 +27,6 @@ describe('referenceTable', () => {
   });
 
   it('rejects an unknown theory with a coded error', () => {
-    expect(() => referenceTable('quantum' as never, 1, 2)).toThrowError(/Theory: expected one of cohomology, equivariant, k-theory, dual-k-theory, received quantum/);
+    expect(() => referenceTable('quantum' as never, 1, 2)).toThrowError(/Theory: expected one of cohomology, equivariant, k-theory, dual-k-theory, ssm-nonequivariant, received quantum/);
   });
 });
