@@ -7,6 +7,7 @@ export type EngineErrorCode =
   | 'invalid_weight_formula'
   | 'division_by_zero'
   | 'overflow'
+  | 'limit_exceeded'
   | 'internal_error';
 
 /** A coded engine error: `message` reads `<What>: expected X, received Y`, `path` names the input field. */

@@ -19,3 +19,4 @@ export * from './weigher.js';
 export * from './transfer-count.js';
 export * from './puzzle-enumeration.js';
 export * from './completion.js';
+export * from './semirings/tuple-semiring.js';

@@ -25,4 +25,14 @@ export interface Semiring<T> {
   /** Optional: the exact quotient a / b of a weight formula; rings without it reject quotients. */
   divide?(a: T, b: T): T;
   toText(a: T): string;
+  /**
+   * Optional: how the numeric kernel may hold these values in typed arrays: exact integers (safe
+   * integers, redone in bigint on overflow), or residues modulo each prime (values are residue arrays).
+   */
+  readonly numeric?: NumericForm;
+  /** Optional: the number of terms a value holds, for the memory estimate of long sweeps. */
+  terms?(a: T): number;
 }
+
+/** Numeric representation of a semiring's values (see `Semiring.numeric`). */
+export type NumericForm = { readonly kind: 'integer' } | { readonly kind: 'modular'; readonly moduli: readonly number[] };

@@ -19,6 +19,7 @@ export const integerSemiring: Semiring<SafeInt> = {
     throw new EngineError('internal_error', 'Integer value: expected a piece set without position weights, received an equivariant piece', 'theory', 'count it with the polynomial or modular semiring');
   },
   toText: (a) => a.toString(),
+  numeric: { kind: 'integer' },
 };
 
 /** Counts fillings: every piece weighs 1, whatever its declared weight. */

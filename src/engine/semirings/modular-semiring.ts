@@ -118,6 +118,7 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
         return (a[k]! * inverseMod(b[k]!, p)) % p;
       }),
     toText: (a) => `[${a.map((r, k) => `${r} mod ${primes[k]}`).join(', ')}]`,
+    numeric: { kind: 'modular', moduli: primes },
   };
 }
 

@@ -34,5 +34,6 @@ export function polynomialSemiring(size: number): PolynomialSemiring {
     position: (i, j) => subPoly(variablePoly(j - 1), variablePoly(i - 1)),
     strip: (_letter, index) => variablePoly(index - 1),
     toText: (a) => polyText(a, variableName),
+    terms: (a) => a.size,
   };
 }
