@@ -20,3 +20,4 @@ export * from './transfer-count.js';
 export * from './puzzle-enumeration.js';
 export * from './completion.js';
 export * from './semirings/tuple-semiring.js';
+export * from './family-count.js';
