@@ -1,6 +1,10 @@
 import {
   completeToTriangle,
-  countBoundary,
+  countBoundaryValues,
+  type CountOptions,
+  type ProgressCallback,
+  type Semiring,
+  type Weigher,
   fillingCountSemiring,
   fractionSemiring,
   valueRing,
@@ -48,33 +52,36 @@ export function regionOfSides(sides: readonly string[]): Region {
 }
 
 /** The exact value and the number of fillings of one boundary, or of its completed triangle. */
-export function countRegion(pieces: PieceSet, sides: readonly string[], options: { completed?: boolean; statistic?: string } = {}): CountResult {
+export function countRegion(
+  pieces: PieceSet,
+  sides: readonly string[],
+  options: { completed?: boolean; statistic?: string; memoryLimitBytes?: number; onProgress?: ProgressCallback } = {},
+): CountResult {
   try {
     const region = regionOfSides(sides);
     const completion = options.completed ? completeToTriangle(region, sides, pieces) : undefined;
     const target = completion ?? { region, sides };
-    const puzzles = countBoundary(target.region, target.sides, pieces, { semiring: fillingCountSemiring });
-    let value: RegionValue;
-    const ringKind = valueRing(pieces);
-    if (ringKind.kind === 'fraction') {
-      const ring = fractionSemiring(target.region.size, ringKind.letter);
-      const v = countBoundary(target.region, target.sides, pieces, { semiring: ring });
-      value = { type: 'fraction', value: v, size: ring.size, letter: ring.letter, variableNames: ring.variableNames };
-    } else if (hasIntegerWeights(pieces)) {
-      value = { type: 'integer', value: countBoundary(target.region, target.sides, pieces, { semiring: integerSemiring }) };
-    } else {
-      const ring = polynomialSemiring(target.region.size);
-      value = { type: 'polynomial', value: countBoundary(target.region, target.sides, pieces, { semiring: ring }), size: ring.size, variableNames: ring.variableNames };
-    }
     const kind = options.statistic;
     if (kind !== undefined && !pieces.pieces.some((p) => p.kind === kind)) {
       const kinds = [...new Set(pieces.pieces.map((p) => p.kind))];
       throw new AppError('invalid_argument', `--statistic: expected a piece kind of ${pieces.name}, one of ${kinds.map((k) => `'${k}'`).join(' | ')}, received '${kind}'`, { path: '--statistic' });
     }
-    const distribution =
-      kind === undefined
-        ? undefined
-        : { kind, counts: countBoundary(target.region, target.sides, pieces, { semiring: generatingSemiring, weigher: statisticWeigher(new Set([kind])) }) };
+    // One sweep gives the number of puzzles, the value and the statistic's distribution.
+    const ringKind = valueRing(pieces);
+    const fraction = ringKind.kind === 'fraction' ? fractionSemiring(target.region.size, ringKind.letter) : undefined;
+    const integer = !fraction && hasIntegerWeights(pieces);
+    const poly = polynomialSemiring(target.region.size);
+    const valueSemiring = (fraction ?? (integer ? integerSemiring : poly)) as Semiring<unknown>;
+    const limits = { ...(options.memoryLimitBytes !== undefined ? { memoryLimitBytes: options.memoryLimitBytes } : {}), ...(options.onProgress ? { onProgress: options.onProgress } : {}) };
+    const rings: CountOptions<unknown>[] = [{ semiring: fillingCountSemiring, ...limits }, { semiring: valueSemiring }];
+    if (kind !== undefined) rings.push({ semiring: generatingSemiring as Semiring<unknown>, weigher: statisticWeigher(new Set([kind])) as Weigher<unknown> });
+    const [puzzles, v, counts] = countBoundaryValues(target.region, target.sides, pieces, rings) as [SafeInt, unknown, Generating | undefined];
+    const value: RegionValue = fraction
+      ? { type: 'fraction', value: v as Fraction, size: fraction.size, letter: fraction.letter, variableNames: fraction.variableNames }
+      : integer
+        ? { type: 'integer', value: v as SafeInt }
+        : { type: 'polynomial', value: v as Polynomial, size: poly.size, variableNames: poly.variableNames };
+    const distribution = kind === undefined ? undefined : { kind, counts: counts! };
     return { theory: pieces.name, region, sides, ...(completion ? { completion } : {}), puzzles, value, ...(distribution ? { distribution } : {}) };
   } catch (e) {
     throw toAppError(e, '--sides');

@@ -1,6 +1,7 @@
 import type { CommandModule } from 'yargs';
 import { resolveTheory } from '../../claims/resolve-theory.js';
-import { generatingSemiring } from '../../engine/index.js';
+import { getHeapStatistics } from 'node:v8';
+import { generatingSemiring, type ProgressCallback } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
 import { countRegion, regionOfSides } from '../../claims/count-region.js';
 import { announceLargeRegion } from '../size-notice.js';
@@ -31,6 +32,18 @@ function countByLocalization(theory: LocalizationTheory, args: CountArgs): void 
   }
   const lines = [`theory:  ${theory} (by localization: no puzzle rule is built in)`, ...triangleEchoLines(triangle), `value:   ${valueText(value)}`];
   process.stdout.write(`${lines.join('\n')}\n`);
+}
+
+// A progress line on stderr for counts that run longer than a second, refreshed at most twice a second.
+function progressLine(): ProgressCallback {
+  const start = Date.now();
+  let shown = 0;
+  return ({ done, total, profiles }) => {
+    const now = Date.now();
+    if (now - start < 1000 || now - shown < 500) return;
+    shown = now;
+    process.stderr.write(`\r\x1b[Kcounting: step ${done}/${total}, ${profiles} live profiles, ${((now - start) / 1000).toFixed(0)} s`);
+  };
 }
 
 interface CountArgs {
@@ -64,7 +77,15 @@ export const countCommand: CommandModule<object, CountArgs> = {
       const pieces = resolveTheory(args.theory);
       const { sides, triangle } = parseBoundary(args);
       announceLargeRegion(regionOfSides(sides), `counting in ${pieces.name}`);
-      const result = countRegion(pieces, sides, { completed: args.completed, ...(args.statistic !== undefined ? { statistic: args.statistic } : {}) });
+      // Half the heap: the engine stops with a coded error naming the limit instead of exhausting V8.
+      const memoryLimitBytes = Math.floor(getHeapStatistics().heap_size_limit / 2);
+      const result = countRegion(pieces, sides, {
+        completed: args.completed,
+        memoryLimitBytes,
+        ...(process.stderr.isTTY ? { onProgress: progressLine() } : {}),
+        ...(args.statistic !== undefined ? { statistic: args.statistic } : {}),
+      });
+      if (process.stderr.isTTY) process.stderr.write('\r\x1b[K');
       if (args.json) {
         process.stdout.write(`${JSON.stringify(countJson(result, args.form, triangle ? triangleEchoJson(triangle) : {}))}\n`);
         return;
