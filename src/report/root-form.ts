@@ -113,6 +113,7 @@ export function formText(p: Polynomial, size: number, names: readonly string[], 
   const c = polyTerms(cofactor, 0);
   const constant = c.length === 1 && c[0]!.exponents.every((e) => e === 0) ? c[0]!.coefficient : undefined;
   const rest = isRootPositive(cofactor, size) ? polyText(toRootBasis(cofactor, size), (k) => rootVariableName(k, size, names)) : polyText(cofactor, yName);
+  if (constant === 1n && parts.length === 1) return { form, text: parts[0]!.slice(1, -1) };
   if (constant === 1n && parts.length) return { form, text: parts.join('*') };
   if (constant === -1n && parts.length) return { form, text: `-${parts.join('*')}` };
   const cof = c.length > 1 && parts.length ? `(${rest})` : rest;

@@ -12,6 +12,9 @@ import { parseBoundaryArgs } from '../boundary-args.js';
 import { runCommand } from '../run-command.js';
 import { openExistingStore, storedClaims } from '../stored-claims.js';
 import { summaryJson } from '../sweep-summary-text.js';
+import { countRegion } from '../../claims/count-region.js';
+import { VALUE_FORMS, type ValueForm } from '../../report/root-form.js';
+import { expandedText, valueText } from '../../report/value-json.js';
 
 interface ReplayArgs {
   claim: string;
@@ -21,6 +24,7 @@ interface ReplayArgs {
   db: string;
   limit: number;
   json: boolean;
+  form: ValueForm;
 }
 
 /** The canonical JSON of the claim: from its file, or from the store when given an id or fingerprint. */
@@ -67,8 +71,20 @@ function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
   });
 }
 
-function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number): string[] {
-  const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${m.text}`];
+// A polynomial value is shown in the chosen --form when it is the region's own value (the usual measure);
+// other measures (statistics, completed regions) keep their canonical text.
+function valueInForm(m: Measured, pieces: PieceSet, form: ValueForm): string {
+  if (form === 'expanded' || !/y\d/.test(m.text)) return m.text;
+  try {
+    const own = countRegion(pieces, m.sides).value;
+    return expandedText(own) === m.text ? valueText(own, form) : m.text;
+  } catch {
+    return m.text;
+  }
+}
+
+function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number, form: ValueForm): string[] {
+  const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${valueInForm(m, pieces, form)}`];
   let shown = 0;
   let more = false;
   try {
@@ -99,7 +115,8 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
       .option('max', { type: 'string', array: true, describe: 'with --sides: raised bounds to search, e.g. --max n=6' })
       .option('db', { type: 'string', default: DEFAULT_STORE_PATH, describe: 'store to read the claim from when given an id' })
       .option('limit', { type: 'number', default: 10, describe: 'draw at most this many puzzles per boundary' })
-      .option('json', { type: 'boolean', default: false, describe: 'print one JSON object (no drawings)' }) as never,
+      .option('json', { type: 'boolean', default: false, describe: 'print one JSON object (no drawings)' })
+      .option('form', { choices: VALUE_FORMS, default: 'roots' as const, describe: 'polynomial values: in z_m = y_{m+1} - y_m when positive there (roots), expanded in y, or factored' }) as never,
   handler: (args) =>
     runCommand(args.json, () => {
       const { id, json } = claimJson(args.claim, args.db);
@@ -114,8 +131,8 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
       const lines = [
         `claim ${id}, instance ${instance.classKey}:${instance.index}: ${r.status}${r.status === 'fails' ? ' (counterexample)' : ''} [exact]`,
         ...(r.permutation ? [`permutation: [${r.permutation.join(',')}]`] : []),
-        ...measuredText('left', r.left, plan.compiled.left, args.limit),
-        ...measuredText('right', r.right, plan.compiled.right, args.limit),
+        ...measuredText('left', r.left, plan.compiled.left, args.limit, args.form),
+        ...measuredText('right', r.right, plan.compiled.right, args.limit, args.form),
         // The right value above is T(b)'s own; the relation compares the left value with σ applied to it.
         ...(r.substituted ? [`σ(right value), σ = ${r.substitution}: ${r.substituted.text}`] : []),
       ];
