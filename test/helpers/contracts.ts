@@ -75,7 +75,7 @@ export function expectCountsRederivable(
 /** The words of a printed shell command (single quotes as `replayCommand` writes them), ready to run. */
 export function commandWords(command: string): string[] {
   const words: string[] = [];
-  const re = /'((?:[^']|'\\'')*)'|(\S+)/g;
+  const re = /'((?:[^']|'\\'')*)'|([^\s']+)/g;
   let current = '';
   let last = 0;
   for (let m = re.exec(command); m; m = re.exec(command)) {

@@ -18,5 +18,6 @@ describe('commandWords (test helper)', () => {
   it('splits like a POSIX shell on spaces, single quotes and the quote escape \'\\\'\' (POSIX sh quoting rules, by hand)', () => {
     const command = `puzzlesweep replay 'it'\\''s here.json' --instance n=3:5 --db 'x y'`;
     expect(commandWords(command)).toEqual(['puzzlesweep', 'replay', "it's here.json", '--instance', 'n=3:5', '--db', 'x y']);
+    expect(commandWords(`a'b c'd e`)).toEqual(['ab cd', 'e']);
   });
 });
