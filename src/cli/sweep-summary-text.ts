@@ -1,14 +1,31 @@
 import { jsonInteger } from '../report/value-json.js';
+import { permutationText } from '../claims/index.js';
 import type { ClaimSummary, SweepSummary } from '../run/sweep-summary.js';
 
 const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
 
+/** `(V vacuous, N nonzero)`: holds with both compared values zero, and with some value nonzero. */
+function holdsSplit(vacuous: number, nonzero: number | null): string {
+  return nonzero === null ? `(${vacuous} vacuous or more; nonzero not counted by an older store)` : `(${nonzero} nonzero, ${vacuous} vacuous: both values 0)`;
+}
+
+/** Permutations serving every instance of a class so far, in block/cycle notation, with their caveats. */
+export function commonPermutationsText(p: { readonly common: readonly (readonly number[])[]; readonly lowerBound: boolean }, incomplete: boolean): string {
+  const shown = p.common.slice(0, 4).map((q) => permutationText(q));
+  const list = p.common.length === 0 ? 'no single permutation serves every instance' : `serving every instance: ${shown.join(', ')}${p.common.length > 4 ? ` and ${p.common.length - 4} more` : ''}`;
+  const caveats = [
+    incomplete ? 'class incomplete: instances not yet checked may rule some out' : '',
+    p.lowerBound ? 'some instance had more than 720 working permutations and only the first 720 were kept, so more may serve all' : '',
+  ].filter(Boolean);
+  return `permutations ${list}${caveats.length ? ` (${caveats.join('; ')})` : ''}`;
+}
+
 function claimText(c: ClaimSummary): string[] {
   const lines = [
     `claim ${c.claimId} (${c.fingerprint.slice(0, 12)}), run ${c.runId}: ${c.status}${c.stopReason === 'finished' ? '' : ` (${c.stopReason.replace(/_/g, ' ')})`}`,
-    `  checked ${c.instancesChecked} instances in ${seconds(c.elapsedMs)}: ${c.holds} hold, ${c.newCounterexamples} new counterexample${c.newCounterexamples === 1 ? '' : 's'}` +
+    `  checked ${c.instancesChecked} instances in ${seconds(c.elapsedMs)}: ${c.holds} hold ${holdsSplit(c.vacuous, c.nonzero)}, ${c.newCounterexamples} new counterexample${c.newCounterexamples === 1 ? '' : 's'}` +
       (c.skippedZero ? `, ${c.skippedZero} skipped (value 0)` : '') +
-      (c.paired ? `, ${c.paired} covered by their involution partner` : ''),
+      (c.paired ? ` (${c.paired} decided with their involution partner)` : ''),
   ];
   if (c.method === 'modular' && c.instancesChecked > 0) lines.push(`  modular comparisons: chance of a false "holds" ≤ ${c.errorBound.toExponential(2)} (use --exact to avoid)`);
   if (c.rechecked.checked) lines.push(`  re-checked ${c.rechecked.checked} stored counterexample${c.rechecked.checked === 1 ? '' : 's'}: ${c.rechecked.stillFail} still fail${c.rechecked.nowHold ? `, ${c.rechecked.nowHold} NOW HOLD (stored result doubtful)` : ''}`);
@@ -16,11 +33,9 @@ function claimText(c: ClaimSummary): string[] {
   lines.push('  classes:');
   for (const k of c.classes) {
     const state = k.state === 'verified' ? `verified (${k.method}${k.method === 'modular' ? `, error ≤ ${k.errorBound?.toExponential(1)}` : ''})` : k.state;
-    const perms = k.commonPermutations
-      ? `  one permutation for all: ${k.commonPermutations.common.length ? k.commonPermutations.common.slice(0, 3).map((p) => `[${p.join(',')}]`).join(' ') : 'none'}${k.commonPermutations.lowerBound ? ' (lists truncated)' : ''}`
-      : '';
+    const perms = k.commonPermutations ? `  ${commonPermutationsText(k.commonPermutations, k.state === 'incomplete')}` : '';
     const progress = k.state === 'incomplete' ? ` (${k.done} of ${k.instances} done)` : '';
-    lines.push(`    ${k.key.padEnd(16)} sides ${k.lengths.join(',').padEnd(14)} ${k.instances.padStart(9)} instances  ${state}${progress}${k.checked ? `  (${k.checked} checked now, ${k.fails} fail)` : ''}${perms}`);
+    lines.push(`    ${k.key.padEnd(16)} sides ${k.lengths.join(',').padEnd(14)} ${k.instances.padStart(9)} instances  ${state}${progress}${k.checked ? `  (${k.checked} checked now, ${k.fails} fail)` : ''}${k.stored ? `  stored: ${k.stored.holds} hold ${holdsSplit(k.stored.vacuous, k.stored.nonzero)}, ${k.stored.fails} fail` : ''}${perms}`);
   }
   if (c.permutations) {
     lines.push(
@@ -43,6 +58,7 @@ function claimText(c: ClaimSummary): string[] {
       `  first counterexample: class ${f.classKey}, index ${f.index}`,
       `    left  (${f.left.theory}) sides ${f.left.sides.map((s) => s || '-').join(' | ')}: ${f.left.text}`,
       `    right (${f.right.theory}) sides ${f.right.sides.map((s) => s || '-').join(' | ')}: ${f.right.text}`,
+      ...(f.substituted ? [`    σ(right), σ = ${f.substitution ?? '(not recorded)'}: ${f.substituted.text}`] : []),
       `    replay: ${f.replay}`,
     );
   }

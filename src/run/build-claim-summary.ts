@@ -1,5 +1,5 @@
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
-import { classCommonPermutations, doneInstances, listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store, type SweepMethod } from '../store/index.js';
+import { classCommonPermutations, classTallies, doneInstances, runHoldTallies, listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store, type SweepMethod } from '../store/index.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 import type { RecheckOutcome } from './recheck-counterexamples.js';
 import { replayCommand, type ClaimSummary, type ClassSummary } from './sweep-summary.js';
@@ -48,6 +48,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
   const verified = new Map<string, { method: 'exact' | 'modular'; errorBound: number }>();
   // An exact verification outranks a modular one of the same class.
   for (const v of listVerified(i.db, i.claim.fingerprint)) if (!verified.has(v.classKey) || v.method === 'exact') verified.set(v.classKey, v);
+  const tallies = classTallies(i.db, i.claim.fingerprint);
   let remainingInstances = 0n;
   const unsettled: string[] = [];
   const classes: ClassSummary[] = i.classes.map((s) => {
@@ -67,6 +68,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
       checked: s.checked,
       holds: s.holds,
       fails: s.fails,
+      ...(tallies.has(s.cls.key) ? { stored: tallies.get(s.cls.key) } : {}),
       done: done.toString(),
       state: failing.has(s.cls.key) ? 'counterexample' : v ? 'verified' : 'incomplete',
       ...(v && !failing.has(s.cls.key) ? { method: v.method, errorBound: v.errorBound } : {}),
@@ -86,6 +88,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
     stopReason: i.stopReason,
     instancesChecked: i.tally.checked,
     holds: i.tally.holds,
+    ...runHoldTallies(i.db, i.runId),
     skippedZero: i.tally.skippedZero,
     paired: i.tally.paired,
     overturned: i.tally.overturned,
@@ -107,6 +110,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
             size: first.size,
             left: first.left,
             right: first.right,
+            ...(first.substituted ? { substituted: first.substituted, substitution: first.substitution } : {}),
             replay: replayCommand(i.claim.file ?? i.claim.id, first.classKey, first.index, i.dbArg),
           },
         }

@@ -1,5 +1,5 @@
 import type { Measured } from '../claims/claim-api.js';
-import type { RunStatus, StopReason, SweepMethod } from '../store/index.js';
+import type { ClassTally, RunStatus, StopReason, SweepMethod } from '../store/index.js';
 
 /** The outcome of one side-length class in this run. */
 export interface ClassSummary {
@@ -13,6 +13,8 @@ export interface ClassSummary {
   readonly checked: number;
   readonly holds: number;
   readonly fails: number;
+  /** The class over every run in the store: boundaries checked, holding (vacuous or nonzero), failing. */
+  readonly stored?: ClassTally | undefined;
   /** `verified`: fully swept, no counterexample; `counterexample`: one is stored; `incomplete`: not fully swept yet. */
   readonly state: 'verified' | 'counterexample' | 'incomplete';
   readonly method?: SweepMethod | undefined;
@@ -27,7 +29,10 @@ export interface FirstCounterexample {
   readonly index: string;
   readonly size: number;
   readonly left: Measured;
+  /** T(b)'s own value; for substitution relations `substituted` is σ(value), with σ written out. */
   readonly right: Measured;
+  readonly substituted?: Measured | undefined;
+  readonly substitution?: string | undefined;
   readonly replay: string;
 }
 
@@ -40,7 +45,11 @@ export interface ClaimSummary {
   readonly status: Exclude<RunStatus, 'running'>;
   readonly stopReason: StopReason;
   readonly instancesChecked: number;
+  /** Boundaries this run found to hold (a pair's representative decides its partner too). */
   readonly holds: number;
+  /** Of `holds`: both compared values zero (vacuous), or some value nonzero (null: not counted by an older store). */
+  readonly vacuous: number;
+  readonly nonzero: number | null;
   readonly skippedZero: number;
   readonly paired: number;
   /** Modular "fails" that exact recomputation overturned. */

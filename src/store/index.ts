@@ -10,3 +10,4 @@ export * from './permutation-records.js';
 export * from './shard-records.js';
 export * from './discover-evidence-records.js';
 export * from './merge-stores.js';
+export * from './class-tallies.js';

@@ -13,6 +13,8 @@ const claim: ClaimSummary = {
   stopReason: 'finished',
   instancesChecked: 12,
   holds: 9,
+  vacuous: 2,
+  nonzero: 7,
   skippedZero: 2,
   paired: 0,
   overturned: 0,
@@ -32,12 +34,30 @@ describe('sweepSummaryText', () => {
   it('prints each count of the summary in its phrase, the first counterexample and its replay command', () => {
     const text = sweepSummaryText(summary);
     expect(text).toContain('claim demo (abcdef012345), run 3: completed');
-    expect(text).toContain('checked 12 instances in 1.5 s: 9 hold, 1 new counterexample, 2 skipped (value 0)');
+    expect(text).toContain('checked 12 instances in 1.5 s: 9 hold (7 nonzero, 2 vacuous: both values 0), 1 new counterexample, 2 skipped (value 0)');
     expect(text).toMatch(/n=2 +sides 2,0,2,0,2,0 +64 instances {2}counterexample {2}\(12 checked now, 1 fail\)/);
     expect(text).toContain('  1 counterexample stored');
     expect(text).toContain('    left  (cohomology) sides 01 | - | 01 | - | 10 | -: 1');
     expect(text).toContain('    replay: puzzlesweep replay demo.json --instance n=2:5');
     expect(text.split('\n').at(-1)).toBe('result: a counterexample is known (2.0 s)');
+  });
+
+  it('shows σ(right value) apart from the right value, and the store\'s counts of a class beside this run\'s', () => {
+    const substituted = { ...claim.firstCounterexample!, right: side('y2 - y1'), substituted: side('y1 - y2'), substitution: 'rev[1..2]' };
+    const stored = { ...claim.classes[0]!, stored: { checked: 64, holds: 60, fails: 4, skippedZero: 0, vacuous: 50, nonzero: 10 } };
+    const text = sweepSummaryText({ ...summary, claims: [{ ...claim, firstCounterexample: substituted, classes: [stored] }] });
+    expect(text).toContain('    right (cohomology) sides 01 | - | 01 | - | 10 | -: y2 - y1');
+    expect(text).toContain('    σ(right), σ = rev[1..2]: y1 - y2');
+    expect(text).toContain('stored: 60 hold (10 nonzero, 50 vacuous: both values 0), 4 fail');
+  });
+
+  it('writes class-wide permutations in block or cycle notation and explains an incomplete class and a truncated list', () => {
+    const perms = { common: [[1, 3, 2], [2, 3, 1]], lowerBound: true };
+    const text = sweepSummaryText({ ...summary, claims: [{ ...claim, classes: [{ ...claim.classes[0]!, state: 'incomplete', commonPermutations: perms }] }] });
+    // [1,3,2] reverses y2..y3; [2,3,1] shifts y1..y3 by one (definitions in the claim schema).
+    expect(text).toContain('permutations serving every instance: rev[2..3], shift[1..3] by 1');
+    expect(text).toContain('class incomplete: instances not yet checked may rule some out');
+    expect(text).toContain('only the first 720 were kept');
   });
 
   it('says how to resume an interrupted run and states the modular error bound', () => {
