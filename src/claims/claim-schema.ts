@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BUILTIN_THEORIES } from '../engine/index.js';
+import { formulaSchema } from './formula/formula-schema.js';
 import { measureSchema } from './measures/measure-registry.js';
 import { relationSchema } from './relations/relation-registry.js';
 import { expressionSchema, sideSchema } from './schema-parts.js';
@@ -58,7 +59,12 @@ const measure = measureSchema;
 const relation = relationSchema;
 
 const compare = z
-  .object({ measure, relation, rightTheory: theory.optional().describe('Theory of the right-hand side (default: the claim theory).') })
+  .object({
+    measure,
+    relation,
+    rightTheory: theory.optional().describe('Theory of the right-hand side (default: the claim theory).'),
+    formula: formulaSchema.optional(),
+  })
   .strict()
   .describe(
     'Left = measure of the boundary b in `theory`; right = measure of T(b) in `rightTheory`. Equivariant values are polynomials in ' +

@@ -6,6 +6,8 @@ import { measureDef } from './measures/measure-registry.js';
 import { relationDef } from './relations/relation-registry.js';
 import { stepDef } from './steps/step-registry.js';
 import type { Claim, TheoryInput } from './claim-schema.js';
+import { checkFormula } from './formula/check-formula.js';
+import type { CompiledFormula } from './formula/compile-formula.js';
 import { pieceSetFromJson } from './resolve-theory.js';
 
 /** A compiled label-count condition (0-based side). */
@@ -29,6 +31,8 @@ export interface CompiledClaim {
   readonly counts: readonly CountCondition[];
   /** The measure is a polynomial (value of a theory with position or variable weights). */
   readonly polynomial: boolean;
+  /** `compare.formula`, compiled: sides as sums of products of values of boundaries built from b. */
+  readonly formula: CompiledFormula | undefined;
 }
 
 function failer(file?: string): Fail {
@@ -118,7 +122,8 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const full = { ...ctx, transformedLengths };
   measureDef(claim.compare.measure).check(claim.compare.measure, { ...full, path: 'compare.measure' });
   relationDef(claim.compare.relation).check(claim.compare.relation, { ...full, path: 'compare.relation' });
-  return { claim, left, right, variables, ranges, lengths, transformedLengths, sameContent, counts, polynomial };
+  const formula = checkFormula(claim, full, ranges);
+  return { claim, left, right, variables, ranges, lengths, transformedLengths, sameContent, counts, polynomial, formula };
 }
 
 // Area is not affine, so regions are built for every assignment (boxes are small in practice; capped).

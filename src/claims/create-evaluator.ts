@@ -9,6 +9,7 @@ import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measure
 import { sizeOf } from './compile-claim.js';
 import { Meter, type Mode, type Value } from './measure.js';
 import { permutationText } from './permutation-text.js';
+import { FormulaMeter } from './formula/formula-meter.js';
 import { planClaim } from './plan-claim.js';
 import { isIdentity, isInvolution, type Permutation } from './substitution.js';
 
@@ -33,9 +34,11 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
   const { measure, relation } = claim.compare;
   const leftMeter = new Meter(compiled.left, measure, names, tuning.cacheSize);
   const rightMeter = new Meter(compiled.right, measure, names, tuning.cacheSize);
+  // A formula claim builds both sides from b itself (exactly; no transform, no pairing).
+  const formula = compiled.formula ? new FormulaMeter(compiled.formula, measure, names, compiled.left.boundaryLabels) : undefined;
   const sameTheory = claim.compare.rightTheory === undefined || JSON.stringify(claim.compare.rightTheory) === JSON.stringify(claim.theory);
   // {b, T(b)} is checked once when T is an involution and the comparison is symmetric.
-  const involutive = (tuning.pairing ?? true) && program.involutive && sameTheory && program.relation.symmetric;
+  const involutive = (tuning.pairing ?? true) && !formula && program.involutive && sameTheory && program.relation.symmetric;
   const searchSpace = program.relation.searchSpace?.(relation);
   // Boundary labels of one UTF-16 unit (all but exotic ones) let a side's length be its string length.
   const singleUnitLabels = compiled.left.boundaryLabels.every((l) => l.length === 1);
@@ -88,12 +91,18 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     }
     // A representative also decides its partner T(b), whose index is ranked only if someone reads it.
     const partner = pairable ? { get partnerIndex() { return plan.indexOf(cls, t.sides); } } : {};
-    let mode: Mode = exactOnly || !compiled.polynomial || searchSpace ? 'exact' : 'modular';
+    let mode: Mode = exactOnly || !compiled.polynomial || searchSpace || formula ? 'exact' : 'modular';
     // Sweeps reuse cached one-pass sweeps in exact mode too; only a confirmation recomputes everything.
     const cache = !confirming;
     // right: T(b)'s own value; compared: σ(right) for a substitution. A modular sweep measures only σ(right)
     // (σ moves the evaluation point); exact mode measures the own value and substitutes it.
     const measureAll = (mode: Mode): { left: Value; right?: Value; compared?: Value } => {
+      if (formula) {
+        const left = formula.left ? formula.side(formula.left, sides, cls.variables, cache) : leftMeter.value(lengths, sides, 'exact', undefined, cache);
+        if (claim.family.nonzeroOnly && isZeroValue(left)) return { left };
+        const right = formula.side(formula.right, sides, cls.variables, cache);
+        return { left, right, compared: right };
+      }
       const left = leftMeter.value(lengths, sides, mode, undefined, cache);
       // A zero left value is skipped, unless it stands for its partner too, whose value is the right one here.
       if (claim.family.nonzeroOnly && isZeroValue(left) && !pairable) return { left };

@@ -68,7 +68,8 @@ export function evaluateTerms(terms: readonly CompiledTerm[], sides: readonly st
         let product: Exact = { kind: 'int', v: 1 };
         for (const p of term.product) {
           const s = p.sides.map((x) => x.build(env, variables));
-          const v = exact(valueOf(p.theory, s.map((x) => [...x].length), s));
+          // Boundary labels are single characters, so a side's length is its string length.
+          const v = exact(valueOf(p.theory, s.map((x) => x.length), s));
           if (isZero(v)) return;
           product = mul(product, v);
         }
