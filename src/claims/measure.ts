@@ -122,9 +122,16 @@ export class Meter {
         degree: unitTriangleCount(makeRegion(lengths)),
       };
     }
+    const map = this.polynomials(lengths, sides, useCache);
+    let p = (map.get(side5) as Polynomial | undefined) ?? new Map<string, bigint>();
+    if (sigma) p = substitutePoly(p, (k) => (k < sigma.length ? sigma[k]! - 1 : k));
+    return { kind: 'poly', v: p };
+  }
+
+  private polynomials(lengths: readonly number[], sides: readonly string[], useCache: boolean): Map<string, unknown> {
     const region = makeRegion(lengths);
     let ring = polynomialSemiring(region.size);
-    const map = this.completions(
+    return this.completions(
       'poly',
       lengths,
       sides,
@@ -135,9 +142,18 @@ export class Meter {
       (v) => this.normalize(v as Polynomial, region.size, ring.variableNames),
       useCache,
     );
-    let p = (map.get(side5) as Polynomial | undefined) ?? new Map<string, bigint>();
-    if (sigma) p = substitutePoly(p, (k) => (k < sigma.length ? sigma[k]! - 1 : k));
-    return { kind: 'poly', v: p };
+  }
+
+  /** Every labeling of side 5 reached by some puzzle, with its exact value or puzzle count, from one sweep (side 5 of `sides` is ignored). */
+  side5Values(lengths: readonly number[], sides: readonly string[]): [string, Value][] {
+    const m = this.measure;
+    if (m.type === 'puzzles' || (m.type === 'value' && !this.polynomial)) {
+      const semiring = m.type === 'puzzles' ? fillingCountSemiring : integerSemiring;
+      const map = this.completions(m.type, lengths, sides, () => ({ semiring }), (v) => v, true);
+      return [...map].map(([k, v]): [string, Value] => [k, { kind: 'int', v: v as SafeInt }]);
+    }
+    if (m.type === 'statistic') throw new Error('side-5 values of a statistic are not needed');
+    return [...this.polynomials(lengths, sides, true)].map(([k, v]): [string, Value] => [k, { kind: 'poly', v: v as Polynomial }]);
   }
 
   // Named variables move to NAMED_OFFSET + their rank among all names, whatever order a sweep met them in.

@@ -16,6 +16,12 @@ export interface CompiledTerm {
   readonly coefficient: number;
   readonly binders: readonly CompiledBinder[];
   readonly product: readonly CompiledBoundary[];
+  /**
+   * Per summation: a boundary of the product whose side 5 is that string (or its reverse) and whose other
+   * sides read only earlier names. One open-side-5 sweep of it then yields the strings with a nonzero
+   * factor, so the sum skips the rest.
+   */
+  readonly drivers: readonly ({ readonly product: number; readonly reversed: boolean } | undefined)[];
 }
 
 /** A formula ready to evaluate: both sides as compiled terms, and every theory it counts in. */
@@ -66,14 +72,24 @@ function compileTerms(terms: readonly FormulaTerm[], path: string, ctx: FormulaC
       const strings = 'sides' in p ? p.sides.map((s, i) => compileString(s, scope, `${pp}.sides[${i}]`, ctx.fail, affine)) : triangleSides(p.triangle.map((s, i) => compileString(s, scope, `${pp}.triangle[${i}]`, ctx.fail, affine)));
       return { theory: name, sides: strings };
     });
-    return { coefficient: term.coefficient, binders, product };
+    const drivers = binders.map((b, k) => {
+      const earlier = new Set(binders.slice(0, k).map((x) => x.name));
+      const p = product.findIndex((q) => q.sides[4]!.bare?.name === b.name && q.sides.every((side, i) => i === 4 || [...side.refs].every((r) => earlier.has(r))));
+      return p < 0 ? undefined : { product: p, reversed: product[p]!.sides[4]!.bare!.reversed };
+    });
+    return { coefficient: term.coefficient, binders, product, drivers };
   });
 }
 
 // c_{λμ}^ν: λ up the NW side, μ down the NE side, ν along the bottom left to right (README).
 function triangleSides([l, m, n]: CompiledString[]): CompiledString[] {
-  const empty: CompiledString = { length: () => 0, build: () => '' };
-  const reversed: CompiledString = { length: n!.length, build: (env, v) => [...n!.build(env, v)].reverse().join('') };
+  const empty: CompiledString = { length: () => 0, build: () => '', refs: new Set() };
+  const reversed: CompiledString = {
+    length: n!.length,
+    build: (env, v) => [...n!.build(env, v)].reverse().join(''),
+    refs: n!.refs,
+    ...(n!.bare ? { bare: { name: n!.bare.name, reversed: !n!.bare.reversed } } : {}),
+  };
   return [l!, empty, m!, empty, reversed, empty];
 }
 

@@ -7,6 +7,9 @@ import type { StringEnv } from './string-expr.js';
 /** The value of one boundary in one theory (exact: integers or polynomials). */
 export type ValueOf = (theory: string, lengths: readonly number[], sides: readonly string[]) => Value;
 
+/** Every labeling of side 5 with its value, the other sides as given (one open-side-5 sweep). */
+export type Side5Of = (theory: string, lengths: readonly number[], sides: readonly string[]) => readonly (readonly [string, Value])[];
+
 type Exact = { kind: 'int'; v: SafeInt } | { kind: 'poly'; v: Polynomial };
 
 const asPoly = (x: Exact): Polynomial => (x.kind === 'poly' ? x.v : constantPoly(toBigInt(x.v)));
@@ -57,19 +60,24 @@ function evalLength(b: Extract<CompiledBinder, { kind: 'length' }>, variables: R
 }
 
 /** Σ over the terms of coefficient · Σ_η Π value(boundary), for the boundary b with `sides`. */
-export function evaluateTerms(terms: readonly CompiledTerm[], sides: readonly string[], variables: Readonly<Record<string, number>>, valueOf: ValueOf, alphabet: readonly string[]): Value {
+export function evaluateTerms(terms: readonly CompiledTerm[], sides: readonly string[], variables: Readonly<Record<string, number>>, valueOf: ValueOf, alphabet: readonly string[], side5Of?: Side5Of): Value {
   let total: Exact = { kind: 'int', v: 0 };
   for (const term of terms) {
     const bound = new Map<string, string>();
     const env: StringEnv = { sides, bound };
+    // Factors already known from a driver's sweep, by product index.
+    const known = new Map<number, Exact>();
     let sum: Exact = { kind: 'int', v: 0 };
     const go = (k: number): void => {
       if (k === term.binders.length) {
         let product: Exact = { kind: 'int', v: 1 };
-        for (const p of term.product) {
-          const s = p.sides.map((x) => x.build(env, variables));
-          // Boundary labels are single characters, so a side's length is its string length.
-          const v = exact(valueOf(p.theory, s.map((x) => x.length), s));
+        for (let q = 0; q < term.product.length; q++) {
+          let v = known.get(q);
+          if (v === undefined) {
+            const s = term.product[q]!.sides.map((x) => x.build(env, variables));
+            // Boundary labels are single characters, so a side's length is its string length.
+            v = exact(valueOf(term.product[q]!.theory, s.map((x) => x.length), s));
+          }
           if (isZero(v)) return;
           product = mul(product, v);
         }
@@ -77,6 +85,28 @@ export function evaluateTerms(terms: readonly CompiledTerm[], sides: readonly st
         return;
       }
       const b = term.binders[k]!;
+      const driver = side5Of ? term.drivers[k] : undefined;
+      if (driver) {
+        // Only the strings where the driver's factor is nonzero can contribute: read them off one sweep.
+        const p = term.product[driver.product]!;
+        const length = b.kind === 'length' ? evalLength(b, variables) : b.of.build(env, variables).length;
+        const built = p.sides.map((x, i) => (i === 4 ? '0'.repeat(length) : x.build(env, variables)));
+        const wanted = b.kind === 'content' ? [...b.of.build(env, variables)].sort().join('') : undefined;
+        const ones = b.kind === 'length' && b.ones !== undefined ? b.ones.constant + Object.entries(b.ones.coefficients).reduce((acc, [name, c]) => acc + c * (variables[name] ?? 0), 0) : undefined;
+        for (const [s5, value] of side5Of!(p.theory, built.map((x) => x.length), built)) {
+          const v = exact(value);
+          if (isZero(v) || s5.length !== length) continue;
+          const s = driver.reversed ? [...s5].reverse().join('') : s5;
+          if (wanted !== undefined && [...s].sort().join('') !== wanted) continue;
+          if (ones !== undefined && [...s].filter((c) => c === '1').length !== ones) continue;
+          bound.set(b.name, s);
+          known.set(driver.product, v);
+          go(k + 1);
+        }
+        known.delete(driver.product);
+        bound.delete(b.name);
+        return;
+      }
       for (const s of binderStrings(b, env, variables, alphabet)) {
         bound.set(b.name, s);
         go(k + 1);

@@ -42,7 +42,9 @@ export class FormulaMeter {
 
   /** One side of the formula at the boundary b; `useCache` false recomputes every value from scratch. */
   side(terms: readonly CompiledTerm[], sides: readonly string[], variables: Readonly<Record<string, number>>, useCache = true): Value {
-    return evaluateTerms(terms, sides, variables, this.valueOf(useCache), this.alphabet);
+    // A confirmation recomputes every value by itself, without the open-side-5 shortcut.
+    const side5Of = useCache ? (theory: string, lengths: readonly number[], s: readonly string[]) => this.meters.get(theory)!.side5Values(lengths, s) : undefined;
+    return evaluateTerms(terms, sides, variables, this.valueOf(useCache), this.alphabet, side5Of);
   }
 
   get left(): readonly CompiledTerm[] | undefined {

@@ -19,23 +19,28 @@ export interface CompiledString {
   /** The length, or a message saying why the expression is invalid for these lengths. */
   readonly length: (env: LengthEnv) => number | string;
   readonly build: (env: StringEnv, variables: Readonly<Record<string, number>>) => string;
+  /** Summation names the expression reads. */
+  readonly refs: ReadonlySet<string>;
+  /** The expression is a summation name, or its reverse. */
+  readonly bare?: { readonly name: string; readonly reversed: boolean };
 }
 
 export type StringFail = (message: string, path: string) => never;
 
 const SIDE = /^s([1-6])$/;
+const NONE: ReadonlySet<string> = new Set();
 
 /** Compiles a string expression; names must be sides s1..s6 or summation names in `scope`. */
 export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path: string, fail: StringFail, affine: (e: number | string, path: string) => Affine): CompiledString {
   if (typeof expr === 'string') {
-    if (expr === '-') return { length: () => 0, build: () => '' };
+    if (expr === '-') return { length: () => 0, build: () => '', refs: NONE };
     const side = SIDE.exec(expr);
     if (side) {
       const i = Number(side[1]) - 1;
-      return { length: (env) => env.sides[i]!, build: (env) => env.sides[i]! };
+      return { length: (env) => env.sides[i]!, build: (env) => env.sides[i]!, refs: NONE };
     }
     if (!scope.has(expr)) fail(`String name: expected 's1'..'s6' or a summation name bound before (${[...scope].map((s) => `'${s}'`).join(', ') || 'none'}), received '${expr}'`, path);
-    return { length: (env) => env.bound.get(expr)!, build: (env) => env.bound.get(expr)! };
+    return { length: (env) => env.bound.get(expr)!, build: (env) => env.bound.get(expr)!, refs: new Set([expr]), bare: { name: expr, reversed: false } };
   }
   if ('concat' in expr) {
     const parts = expr.concat.map((e, k) => compileString(e, scope, `${path}.concat[${k}]`, fail, affine));
@@ -50,19 +55,25 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
         return n;
       },
       build: (env, v) => parts.map((p) => p.build(env, v)).join(''),
+      refs: new Set(parts.flatMap((p) => [...p.refs])),
     };
   }
   if ('reverse' in expr) {
     const inner = compileString(expr.reverse, scope, `${path}.reverse`, fail, affine);
-    return { length: inner.length, build: (env, v) => [...inner.build(env, v)].reverse().join('') };
+    return {
+      length: inner.length,
+      build: (env, v) => [...inner.build(env, v)].reverse().join(''),
+      refs: inner.refs,
+      ...(inner.bare ? { bare: { name: inner.bare.name, reversed: !inner.bare.reversed } } : {}),
+    };
   }
   if ('sort' in expr) {
     const inner = compileString(expr.sort, scope, `${path}.sort`, fail, affine);
-    return { length: inner.length, build: (env, v) => [...inner.build(env, v)].sort().join('') };
+    return { length: inner.length, build: (env, v) => [...inner.build(env, v)].sort().join(''), refs: inner.refs };
   }
   if ('complement' in expr) {
     const inner = compileString(expr.complement, scope, `${path}.complement`, fail, affine);
-    return { length: inner.length, build: (env, v) => [...inner.build(env, v)].map((c) => (c === '0' ? '1' : c === '1' ? '0' : c)).join('') };
+    return { length: inner.length, build: (env, v) => [...inner.build(env, v)].map((c) => (c === '0' ? '1' : c === '1' ? '0' : c)).join(''), refs: inner.refs };
   }
   if ('repeat' in expr) {
     const times = affine(expr.times, `${path}.times`);
@@ -73,6 +84,7 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
         return n >= 0 ? n : `Repeat count: expected ≥ 0, received ${n}`;
       },
       build: (_env, v) => label.repeat(evalAffine(times, v)),
+      refs: NONE,
     };
   }
   const inner = compileString(expr.part, scope, `${path}.part`, fail, affine);
@@ -90,6 +102,7 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
       const f = evalAffine(from, v);
       return inner.build(env, v).slice(f - 1, f - 1 + evalAffine(length, v));
     },
+    refs: inner.refs,
   };
 }
 

@@ -75,3 +75,42 @@ describe('formula claims: evaluation', () => {
     }
   });
 });
+
+describe('formula claims: sums read off one open-side-5 sweep', () => {
+  it('both sides of associativity (n ≤ 3) equal the sums of products of naive triangle counts', () => {
+    const claim = parseClaim({
+      id: 'assoc-test',
+      statement: 's',
+      theory: 'cohomology',
+      family: { sides: ['n', 'n', 0, 'n', 'n', 0], variables: [{ name: 'n', min: 1, max: 3 }], conditions: [{ type: 'sameContent', sides: [1, 2, 4] }, { type: 'sameContent', sides: [4, 5] }] },
+      transform: [],
+      compare: {
+        measure: { type: 'value' },
+        relation: { type: 'equal' },
+        formula: {
+          left: [{ sum: [{ name: 'nu', sameContentAs: 's1' }], product: [{ triangle: ['s1', 's2', 'nu'] }, { triangle: ['nu', 's4', 's5'] }] }],
+          right: [{ sum: [{ name: 'kappa', length: 'n' }], product: [{ triangle: ['s2', 's4', 'kappa'] }, { triangle: ['s1', 'kappa', 's5'] }] }],
+        },
+      },
+    });
+    const c = (l: string, m: string, n: string) => naiveCount([l.length, 0, m.length, 0, n.length, 0], [l, '', m, '', [...n].reverse().join(''), ''], cohomologyPieces()).fillings;
+    const plan = planClaim(claim);
+    const evaluator = createEvaluator(claim, { exact: true });
+    let nonzero = 0;
+    for (const cls of plan.classes()) {
+      const n = cls.variables.n!;
+      const all = Array.from({ length: 2 ** n }, (_, k) => k.toString(2).padStart(n, '0'));
+      for (let i = 0n; i < plan.instanceCount(cls); i++) {
+        const b = plan.instanceAt(cls, i);
+        const [l, m, , r, s] = b.sides as [string, string, string, string, string];
+        const left = all.reduce((acc, nu) => acc + c(l, m, nu) * c(nu, r, s), 0n);
+        const right = all.reduce((acc, k) => acc + c(m, r, k) * c(l, k, s), 0n);
+        const result = evaluator.evaluate(b);
+        expect(result.left.text).toBe(left.toString());
+        expect(result.right.text).toBe(right.toString());
+        if (left !== 0n) nonzero++;
+      }
+    }
+    expect(nonzero).toBeGreaterThan(10);
+  });
+});
