@@ -45,13 +45,24 @@ export function openStore(path: string, options: { readonly?: boolean } = {}): S
       hint: options.readonly ? 'run a sweep first, or point --db at an existing store' : 'check that the folder is writable',
     });
   }
-  db.pragma('busy_timeout = 10000');
-  db.pragma('foreign_keys = ON');
-  if (!options.readonly) {
-    db.pragma('journal_mode = WAL');
-    db.pragma('synchronous = NORMAL');
-    registerStoreFunctions(db);
-    migrate(db);
+  try {
+    db.pragma('busy_timeout = 10000');
+    db.pragma('foreign_keys = ON');
+    db.prepare('SELECT COUNT(*) FROM sqlite_master').get(); // reads the header: a damaged file fails here
+    if (!options.readonly) {
+      db.pragma('journal_mode = WAL');
+      db.pragma('synchronous = NORMAL');
+      registerStoreFunctions(db);
+      migrate(db);
+    }
+  } catch (e) {
+    db.close();
+    // SQLITE_NOTADB and friends: a damaged file or not a store at all (an AppError from migrate passes through).
+    if (e instanceof AppError || (e as { code?: string }).code?.startsWith('SQLITE_') !== true) throw e;
+    throw new AppError('store_error', `Store: expected a SQLite store, received '${path}' (${(e as Error).message})`, {
+      path: '--db',
+      hint: 'the file is damaged or is not a puzzlesweep store; point --db elsewhere or move the file aside',
+    });
   }
   return db;
 }
