@@ -1,4 +1,4 @@
-import { isBuiltinTheory, makeRegion, theoryPieceSet, type PieceSet } from '../engine/index.js';
+import { isBuiltinTheory, makeRegion, theoryPieceSet, valueRing, type PieceSet } from '../engine/index.js';
 import { AppError, toAppError } from '../errors.js';
 import { addAffine, boxCorners, boxPoints, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
 import type { CheckContext, Fail, Where } from './compile-context.js';
@@ -59,6 +59,16 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const fail = failer(file);
   const left = resolve(claim.theory, 'theory', file, fail);
   const right = claim.compare.rightTheory === undefined ? left : resolve(claim.compare.rightTheory, 'compare.rightTheory', file, fail);
+  // Sweeps compare exact polynomials (and confirm every counterexample exactly); quotient values are not wired in yet.
+  for (const [pieces, path] of [[left, 'theory'], [right, 'compare.rightTheory']] as const) {
+    if (claim.compare.measure.type === 'value' && valueRing(pieces).kind === 'fraction') {
+      fail(
+        `Theory values: expected integers or polynomials for a swept value, received quotients (piece set '${pieces.name}' has weight formulas in t or with '/')`,
+        path,
+        'count such boundaries with `count`; sweeping quotient-valued theories is not supported yet (README, "Theories")',
+      );
+    }
+  }
   const alphabet = [...left.boundaryLabels].sort().join(' ');
   if ([...right.boundaryLabels].sort().join(' ') !== alphabet) {
     fail(`Right-hand theory labels: expected the boundary labels of the claim theory (${alphabet}), received ${[...right.boundaryLabels].join(' ')}`, 'compare.rightTheory');
