@@ -3,7 +3,9 @@ import type { UnitTriangle } from './lattice.js';
 import type { Piece, PieceSet } from './piece-set.js';
 import type { Region } from './region.js';
 import { compilePlan, expandStep, labelChar, type TransferPlan } from './transfer-plan.js';
-import { positionIndices } from './weigher.js';
+import { formulaRing, positionIndices } from './weigher.js';
+import { fractionSemiring } from './semirings/fraction-semiring.js';
+import { evaluateFormula, formulaUses } from './weight-formula.js';
 
 export interface PlacedPiece {
   readonly triangle: UnitTriangle;
@@ -24,6 +26,11 @@ export function weightText(piece: Piece, triangle: UnitTriangle): string {
   if (w.type === 'integer') return String(w.value);
   if (w.type === 'variable') return w.name;
   const { i, j } = positionIndices(triangle);
+  if (w.type === 'formula') {
+    // The formula's exact value on this triangle, e.g. `(y3 - y1) / (y3 - y1 + 1)` or `1 - t1*t3^-1`.
+    const ring = fractionSemiring(j, formulaUses(w.formula).letters.has('t') ? 't' : 'y');
+    return ring.toText(evaluateFormula(w.formula, formulaRing(ring), { i, j }));
+  }
   return `y${j} - y${i}`;
 }
 
