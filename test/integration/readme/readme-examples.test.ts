@@ -1,9 +1,9 @@
 import { spawnSync } from 'node:child_process';
-import { cpSync, mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync } from 'node:fs';
+import { cpSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 // The README is executable documentation: every line of its ```sh blocks runs, in order, in a fresh
 // copy of the built project, and must exit with the status the README gives (`# exits N`, else 0).
@@ -63,16 +63,18 @@ function asRun(command: string, cli: string): string | undefined {
 
 describe('README shell examples', () => {
   const copy = mkdtempSync(join(tmpdir(), 'puzzlesweep-readme-'));
-  afterAll(() => rmSync(copy, { recursive: true, force: true }));
-
-  it('run in order on a built copy and exit as the README says', () => {
+  beforeAll(() => {
     const files = spawnSync('git', ['ls-files', '-z'], { cwd: root, encoding: 'utf8' }).stdout.split('\0').filter(Boolean);
-    for (const f of files) {
+    for (const f of files.filter((f) => existsSync(join(root, f)))) {
       mkdirSync(dirname(join(copy, f)), { recursive: true });
       cpSync(join(root, f), join(copy, f));
     }
     cpSync(join(root, 'dist'), join(copy, 'dist'), { recursive: true });
     symlinkSync(join(root, 'node_modules'), join(copy, 'node_modules'), 'dir');
+  });
+  afterAll(() => rmSync(copy, { recursive: true, force: true }));
+
+  it('run in order on a built copy and exit as the README says', () => {
     const readme = readFileSync(join(copy, 'README.md'), 'utf8');
     const examples = shellExamples(readme);
     // The README shows well over twenty commands; a broken extractor must not pass by finding none.
@@ -87,4 +89,17 @@ describe('README shell examples', () => {
     }
     expect(failures).toEqual([]);
   }, 1_500_000);
+
+  it('runs its JavaScript examples against the built package (imported by name, as a user would)', () => {
+    const readme = readFileSync(join(root, 'README.md'), 'utf8');
+    const blocks = [...readme.matchAll(/^```js\n([\s\S]*?)^```$/gm)].map((m) => m[1]!);
+    expect(blocks.length).toBeGreaterThan(0);
+    blocks.forEach((code, i) => {
+      // Inside the package folder, `import … from 'puzzlesweep'` resolves through package.json "exports".
+      const file = join(copy, `readme-example-${i}.mjs`);
+      writeFileSync(file, code);
+      const r = spawnSync(process.execPath, [file], { cwd: copy, encoding: 'utf8', timeout: 240_000 });
+      expect(r.status, `README js block ${i + 1}: ${r.stderr}`).toBe(0);
+    });
+  }, 600_000);
 });
