@@ -9,3 +9,4 @@ export { claimFingerprint, canonicalClaimJson, mathematicalClaimJson, ENGINE_VER
 export { planClaim, type ClaimPlanExt } from './plan-claim.js';
 export { applyTransform } from './boundary-transform.js';
 export { createEvaluator, type EvaluatorTuning } from './create-evaluator.js';
+export { inferPermutationRule, type PermutationRule, type ClassPermutations } from './permutation-rule.js';

@@ -1,4 +1,5 @@
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
+import { inferPermutationRule } from '../claims/index.js';
 import { classCommonPermutations, classTallies, doneInstances, runHoldTallies, listCounterexamples, listVerified, permutationSummary, type RunStatus, type StopReason, type Store, type SweepMethod } from '../store/index.js';
 import type { SweepClaim } from './claim-runtime-module.js';
 import type { RecheckOutcome } from './recheck-counterexamples.js';
@@ -79,6 +80,9 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
   const outcome: ClaimSummary['outcome'] =
     counterexamples.length > 0 ? 'counterexample' : i.classes.every((c) => c.count === 0n) ? 'empty' : unsettled.length > 0 || !i.complete ? 'incomplete' : 'holds';
   const perms = permutationSummary(i.db, i.claim.fingerprint);
+  // One rule for the class-wide permutations of every class that has them, as a relation to paste.
+  const withPerms = i.classes.flatMap((s, k) => (classes[k]!.commonPermutations ? [{ variables: s.cls.variables, common: classes[k]!.commonPermutations!.common }] : []));
+  const rule = withPerms.length ? inferPermutationRule(Object.keys(withPerms[0]!.variables), withPerms) : undefined;
   return {
     claimId: i.claim.id,
     fingerprint: i.claim.fingerprint,
@@ -116,6 +120,7 @@ export function buildClaimSummary(i: SummaryInput): ClaimSummary {
         }
       : {}),
     ...(perms ? { permutations: perms } : {}),
+    ...(withPerms.length ? { permutationRule: rule ? { relation: rule.relation, text: rule.text } : null } : {}),
     elapsedMs: Date.now() - i.began,
   };
 }

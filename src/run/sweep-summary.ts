@@ -73,6 +73,11 @@ export interface ClaimSummary {
   readonly firstCounterexample?: FirstCounterexample | undefined;
   /** For "up to some permutation" claims: permutations found, and the single one if one serves all. */
   readonly permutations?: { readonly instances: number; readonly distinct: number; readonly common?: readonly number[] | undefined } | undefined;
+  /**
+   * "Up to some permutation" claims: one rule (block reversal or shift with affine endpoints) serving the
+   * class-wide permutations of every class, as a relation ready to paste; null when none fits.
+   */
+  readonly permutationRule?: { readonly relation: object; readonly text: string } | null | undefined;
   readonly elapsedMs: number;
 }
 
