@@ -59,6 +59,9 @@ export async function runSweep(input: SweepInput): Promise<SweepSummary> {
     db.close();
   }
   const interrupted = claims.some((c) => c.status === 'interrupted') || (input.signal?.aborted ?? false);
-  const exitCode = sweepExitCode(claims, interrupted);
+  // A shard that stopped before its part was done must not look done to a job scheduler, even when it found a
+  // counterexample: its job is resubmitted until the shard is finished (README, "Sweeping on a cluster").
+  const unfinishedShard = options.shard !== undefined && claims.some((c) => c.stopReason !== 'finished' || c.outcome === 'incomplete');
+  const exitCode = !interrupted && unfinishedShard ? UNFINISHED_SHARD_EXIT : sweepExitCode(claims, interrupted);
   return { db: options.db, claims, interrupted, elapsedMs: Date.now() - began, workerCrashes, exitCode };
 }

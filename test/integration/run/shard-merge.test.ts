@@ -47,6 +47,23 @@ describe('sharded runs merged (built CLI, real store files)', () => {
     expect(status(merged).counterexamples).toBe(status(reference).counterexamples);
   });
 
+  it('a shard stopped early exits 4 even when it found a counterexample, so a scheduler runs it again', () => {
+    const claim = 'conjectures/k-theory-equals-cohomology.json';
+    const stores = [0, 1].map((i) => join(dir, `mc-${i}.sqlite`));
+    const exits = stores.map((db, i) => {
+      const r = cli(['run', claim, '--shard', `${i}/2`, '--db', db, '--workers', '1', '--chunk-size', '16', '--max-counterexamples', '1', '--json']);
+      const summary = JSON.parse(r.stdout) as { claims: { stopReason: string }[] };
+      // exit 4 exactly when the shard stopped before its part was done (README, exit codes)
+      expect(r.status === 4, r.stdout).toBe(summary.claims[0]!.stopReason !== 'finished');
+      return r.status;
+    });
+    // The claim's one counterexample with n ≤ 4 lies in one shard, which then stops early.
+    expect(exits).toContain(4);
+    const m = cli(['merge', ...stores, '--into', join(dir, 'mc-merged.sqlite'), '--json']);
+    const unfinished = (JSON.parse(m.stdout) as { claims: { shards: { unfinished: { index: number }[] } }[] }).claims[0]!.shards.unfinished.map((u) => u.index);
+    expect(unfinished).toEqual([0, 1].filter((i) => exits[i] === 4));
+  });
+
   it('a shard stopped by --time-limit exits 4, merge reports it unfinished, and running it again completes it', () => {
     const claim = 'conjectures/k-theory-equals-cohomology.json';
     const a = join(dir, 'tl-0.sqlite');
