@@ -9,6 +9,11 @@ export type ErrorCode =
   | 'file_not_found'
   | 'claim_not_found'
   | 'store_error'
+  | 'store_corrupt'
+  | 'store_foreign'
+  | 'store_read_only'
+  | 'store_unavailable'
+  | 'family_too_large'
   | 'worker_crashed'
   | 'fingerprint_mismatch'
   | 'shard_mismatch'
@@ -60,6 +65,11 @@ const INPUT_ERRORS: ReadonlySet<ErrorCode> = new Set([
   'invalid_json',
   'file_not_found',
   'claim_not_found',
+  'store_corrupt',
+  'store_foreign',
+  'store_read_only',
+  'store_unavailable',
+  'family_too_large',
   'fingerprint_mismatch',
   'shard_mismatch',
   'merge_conflict',

@@ -1,5 +1,8 @@
+import { compileClaimProgram, planClaim } from '../claims/index.js';
+import type { ClaimPlan } from '../claims/claim-api.js';
 import { openStore, DEFAULT_STORE_PATH } from '../store/index.js';
 import { importClaimRuntime, type SweepClaim } from './claim-runtime-module.js';
+import { checkFamilyBounds, checkInstanceCount } from './family-size.js';
 import type { RunOptions } from './run-options.js';
 import { sweepClaim, type SweepProgress } from './sweep-claim.js';
 import type { ClaimSummary, SweepSummary } from './sweep-summary.js';
@@ -31,16 +34,29 @@ export function sweepExitCode(claims: readonly ClaimSummary[], interrupted: bool
 export async function runSweep(input: SweepInput): Promise<SweepSummary> {
   const began = Date.now();
   const { options } = input;
-  const runtime = await importClaimRuntime(input.runtimeModule ?? new URL('./claim-runtime.js', import.meta.url).href);
+  // Every claim is planned and its size checked before the store is opened: an absurd bound writes nothing.
+  const plans: ClaimPlan[] = [];
+  if (input.runtimeModule === undefined) {
+    for (const claim of input.claims) {
+      const program = compileClaimProgram(JSON.parse(claim.canonicalJson) as unknown, claim.file);
+      checkFamilyBounds(program, options.max);
+      const plan = planClaim(program);
+      checkInstanceCount(plan, options.max);
+      plans.push(plan);
+    }
+  } else {
+    const runtime = await importClaimRuntime(input.runtimeModule);
+    for (const claim of input.claims) plans.push(runtime.createClaimRuntime(claim.canonicalJson, { exact: options.exact }).plan);
+  }
   const db = openStore(options.db);
   const pool = new WorkerPool(options.workers);
   const deadline = options.timeLimit !== undefined ? began + options.timeLimit * 1000 : undefined;
   const claims: ClaimSummary[] = [];
   let workerCrashes = 0;
   try {
-    for (const claim of input.claims) {
+    for (const [i, claim] of input.claims.entries()) {
       if (input.signal?.aborted) break;
-      const { plan } = runtime.createClaimRuntime(claim.canonicalJson, { exact: options.exact });
+      const plan = plans[i]!;
       const ctx = {
         db,
         pool,

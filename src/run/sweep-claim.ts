@@ -9,6 +9,7 @@ import {
   reapDeadRuns,
   releaseChunk,
   saveClaim,
+  storeFault,
   startRun,
   touchRun,
   type LeasedChunk,
@@ -206,8 +207,12 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   } catch (e) {
     sched?.halt('error');
     await Promise.allSettled([...inflight]);
-    const err = toAppError(e);
-    finishRun(db, runId, 'failed', 'error', { code: err.code, message: err.message });
+    const err = storeFault(e, options.db) ?? toAppError(e);
+    try {
+      finishRun(db, runId, 'failed', 'error', { code: err.code, message: err.message });
+    } catch {
+      // The store itself failed (e.g. its folder was removed): the error above says so.
+    }
     throw err;
   } finally {
     clearInterval(heartbeat);

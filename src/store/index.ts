@@ -11,3 +11,4 @@ export * from './shard-records.js';
 export * from './discover-evidence-records.js';
 export * from './merge-stores.js';
 export * from './class-tallies.js';
+export * from './store-fault.js';

@@ -4,6 +4,7 @@ import Database from 'better-sqlite3';
 import { AppError } from '../errors.js';
 import { registerStoreFunctions } from './store-functions.js';
 import { STORE_MIGRATIONS } from './store-migrations.js';
+import { foreignStore, storeFault } from './store-fault.js';
 
 /** An open store: the better-sqlite3 handle; every reader and writer in src/store takes it. */
 export type Store = Database.Database;
@@ -33,36 +34,39 @@ function migrate(db: Store): void {
   }).immediate();
 }
 
+// Tables of a store (any version); a database holding other tables and none of these is someone else's.
+const OWN_TABLES = new Set(['schema_version', 'claims', 'runs', 'chunks']);
+
+function checkOwnership(db: Store, path: string): void {
+  const tables = (db.prepare(`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'`).all() as { name: string }[]).map((r) => r.name);
+  if (tables.length > 0 && !tables.some((t) => OWN_TABLES.has(t))) throw foreignStore(path, tables);
+}
+
 /** Opens (creating folder and file if needed) and migrates a store; `readonly` never creates anything. */
 export function openStore(path: string, options: { readonly?: boolean } = {}): Store {
-  let db: Store;
+  let db: Store | undefined;
   try {
     if (!options.readonly) mkdirSync(dirname(path), { recursive: true });
     db = new Database(path, { readonly: options.readonly ?? false, fileMustExist: options.readonly ?? false });
-  } catch (e) {
-    throw new AppError('store_error', `Store: expected a readable SQLite file, received '${path}' (${(e as Error).message})`, {
-      path: '--db',
-      hint: options.readonly ? 'run a sweep first, or point --db at an existing store' : 'check that the folder is writable',
-    });
-  }
-  try {
     db.pragma('busy_timeout = 10000');
     db.pragma('foreign_keys = ON');
-    db.prepare('SELECT COUNT(*) FROM sqlite_master').get(); // reads the header: a damaged file fails here
+    // Reading the schema is the first real read: a file that is not SQLite fails here, before anything is written.
+    checkOwnership(db, path);
     if (!options.readonly) {
       db.pragma('journal_mode = WAL');
       db.pragma('synchronous = NORMAL');
       registerStoreFunctions(db);
       migrate(db);
     }
+    return db;
   } catch (e) {
-    db.close();
-    // SQLITE_NOTADB and friends: a damaged file or not a store at all (an AppError from migrate passes through).
-    if (e instanceof AppError || (e as { code?: string }).code?.startsWith('SQLITE_') !== true) throw e;
-    throw new AppError('store_error', `Store: expected a SQLite store, received '${path}' (${(e as Error).message})`, {
-      path: '--db',
-      hint: 'the file is damaged or is not a puzzlesweep store; point --db elsewhere or move the file aside',
-    });
+    db?.close();
+    throw (
+      storeFault(e, path) ??
+      new AppError('store_error', `Store: expected a readable SQLite file, received '${path}' (${(e as Error).message})`, {
+        path: '--db',
+        hint: options.readonly ? 'run a sweep first, or point --db at an existing store' : 'check that the folder is writable',
+      })
+    );
   }
-  return db;
 }

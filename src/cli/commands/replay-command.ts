@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
 import type { CommandModule } from 'yargs';
 import { compileClaimProgram, createEvaluator, planClaim, type ClaimPlanExt } from '../../claims/index.js';
+import { checkClassKey } from '../../run/family-size.js';
 import type { Instance, Measured } from '../../claims/claim-api.js';
 import { enumeratePuzzles, makeRegion, type PieceSet } from '../../engine/index.js';
 import { AppError, toAppError } from '../../errors.js';
@@ -121,6 +122,8 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
     runCommand(args.json, () => {
       const { id, json } = claimJson(args.claim, args.db);
       const claim = compileClaimProgram(JSON.parse(json) as unknown);
+      // An absurd class key (e.g. n=100000) is refused before its region is built.
+      if (args.instance?.includes(':')) checkClassKey(claim, args.instance.slice(0, args.instance.lastIndexOf(':')));
       const plan = planClaim(claim);
       const instance = findInstance(plan, args);
       const r = createEvaluator(claim, { exact: true }).confirm(instance);

@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import type { CommandModule } from 'yargs';
 import { loadSweepClaim } from '../../run/load-sweep-claim.js';
 import { parseRunOptions } from '../../run/run-options.js';
@@ -69,6 +70,10 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
         ...(args['chunk-size'] !== undefined ? { chunkSize: args['chunk-size'] } : {}),
         ...(args.shard !== undefined ? { shard: args.shard } : {}),
       });
+      const cores = availableParallelism();
+      if (options.workers > cores) {
+        process.stderr.write(`⚠ --workers ${options.workers} is above this machine's ${cores} cores: the extra threads share cores and slow each other down (the default is ${cores})\n`);
+      }
       // Every claim is validated before the store is opened, so bad input never touches it.
       const claims = args.claims.map((file) => loadSweepClaim(file));
       const bar = sweepProgressBar(!options.json);
