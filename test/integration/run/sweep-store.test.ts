@@ -65,6 +65,8 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
       'claims[0].instancesChecked': total,
       'claims[0].holds': total - fails,
       'claims[0].skippedZero': 0,
+      'claims[0].vacuous': 0, // the fake's left value is 1, never 0
+      'claims[0].nonzero': total - fails,
       'claims[0].paired': 0,
       'claims[0].overturned': 0,
       'claims[0].newCounterexamples': fails,
@@ -87,6 +89,13 @@ describe('sweep runner and store (fake claims layer, real workers and SQLite)', 
       derived[`claims[0].classes[${i}].instances`] = 2 ** n;
       derived[`claims[0].classes[${i}].checked`] = 2 ** n;
       derived[`claims[0].classes[${i}].done`] = 2 ** n;
+      // The store's tallies of the class equal this run's: the store was fresh.
+      derived[`claims[0].classes[${i}].stored.checked`] = 2 ** n;
+      derived[`claims[0].classes[${i}].stored.holds`] = 2 ** n - failing(n);
+      derived[`claims[0].classes[${i}].stored.fails`] = failing(n);
+      derived[`claims[0].classes[${i}].stored.skippedZero`] = 0;
+      derived[`claims[0].classes[${i}].stored.vacuous`] = 0;
+      derived[`claims[0].classes[${i}].stored.nonzero`] = 2 ** n - failing(n);
       derived[`claims[0].classes[${i}].holds`] = 2 ** n - failing(n);
       derived[`claims[0].classes[${i}].fails`] = failing(n);
     });
