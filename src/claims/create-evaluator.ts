@@ -9,7 +9,7 @@ import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measure
 import { sizeOf } from './compile-claim.js';
 import { Meter, type Mode, type Value } from './measure.js';
 import { permutationText } from './permutation-text.js';
-import { FormulaMeter } from './formula/formula-meter.js';
+import { FORMULA_THEORY, FormulaMeter } from './formula/formula-meter.js';
 import { planClaim } from './plan-claim.js';
 import { isIdentity, isInvolution, type Permutation } from './substitution.js';
 
@@ -117,9 +117,12 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     };
     let values = measureAll(mode);
     const show = (v: Value, theory: string, ls: readonly number[], ss: readonly string[]) => measured(theory, ls, ss, v, names, confirming);
+    // A formula side is named `formula`, so that no one draws b's own puzzles as its puzzles.
+    const leftName = formula?.left ? FORMULA_THEORY : compiled.left.name;
+    const rightName = formula ? FORMULA_THEORY : compiled.right.name;
     const shown = () => ({
-      left: show(values.left, compiled.left.name, lengths, sides),
-      right: values.right ? show(values.right, compiled.right.name, t.lengths, t.sides) : unmeasured(compiled.right.name, t.lengths, t.sides, values.compared ? '(only σ(R) computed)' : '(not computed)'),
+      left: show(values.left, leftName, lengths, sides),
+      right: values.right ? show(values.right, rightName, t.lengths, t.sides) : unmeasured(compiled.right.name, t.lengths, t.sides, values.compared ? '(only σ(R) computed)' : '(not computed)'),
       ...(sigma && values.compared ? { substituted: show(values.compared, compiled.right.name, t.lengths, t.sides), substitution: permutationText(sigma) } : {}),
     });
     const bothZero = () => isZeroValue(values.left) && values.compared !== undefined && isZeroValue(values.compared);

@@ -23,6 +23,8 @@ function boundaryFigure(role: 'left' | 'right', b: ReportBoundary, resolve: Piec
   const head = `<figcaption><span class="role">${role === 'left' ? 'claimed side' : 'compared side'}</span><span>${escapeXml(b.theory)}</span>${sidesHtml(b.sides)}<span>value <span class="value">${valueHtml(b.value)}</span></span>`;
   let drawing: string;
   let total = '';
+  // A formula side is a sum of products of other boundaries' values: it has no puzzles of its own.
+  if (b.theory === 'formula') return `<figure data-boundary="${role}">${head}</figcaption><p class="note">the claim's formula at this boundary: a sum of products of values of other boundaries</p></figure>`;
   try {
     const { drawn, total: n } = puzzlesOf(b, resolve(b.theory), limit);
     total = ` data-puzzle-total="${n}"`;

@@ -7,6 +7,9 @@ import { evaluateTerms } from './evaluate-formula.js';
 // A formula asks for the same small boundaries over and over (every η of every instance): keep each value.
 const MAX_REMEMBERED = 1_000_000;
 
+/** The theory name a formula side carries in results, counterexamples and reports. */
+export const FORMULA_THEORY = 'formula';
+
 /** Evaluates a formula's sides exactly, each boundary's value computed once per theory. */
 export class FormulaMeter {
   private readonly meters = new Map<string, Meter>();

@@ -84,8 +84,10 @@ function valueInForm(m: Measured, pieces: PieceSet, form: ValueForm): string {
   }
 }
 
-function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number, form: ValueForm): string[] {
+function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number, form: ValueForm, formula = false): string[] {
   const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${valueInForm(m, pieces, form)}`];
+  // A formula side is a sum of products of other boundaries' values: b's own puzzles are not its puzzles.
+  if (formula) return [...lines, '  (the claim\'s formula evaluated at b: a sum of products of values of other boundaries, so no puzzles are drawn)'];
   let shown = 0;
   let more = false;
   try {
@@ -134,8 +136,8 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
       const lines = [
         `claim ${id}, instance ${instance.classKey}:${instance.index}: ${r.status}${r.status === 'fails' ? ' (counterexample)' : ''} [exact]`,
         ...(r.permutation ? [`permutation: [${r.permutation.join(',')}]`] : []),
-        ...measuredText('left', r.left, plan.compiled.left, args.limit, args.form),
-        ...measuredText('right', r.right, plan.compiled.right, args.limit, args.form),
+        ...measuredText(claim.formula?.left ? 'left (formula)' : 'left', r.left, plan.compiled.left, args.limit, args.form, claim.formula?.left !== undefined),
+        ...measuredText(claim.formula ? 'right (formula)' : 'right', r.right, plan.compiled.right, args.limit, args.form, claim.formula !== undefined),
         // The right value above is T(b)'s own; the relation compares the left value with σ applied to it.
         ...(r.substituted ? [`σ(right value), σ = ${r.substitution}: ${r.substituted.text}`] : []),
       ];
