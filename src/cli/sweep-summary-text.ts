@@ -76,7 +76,9 @@ export function sweepSummaryText(s: SweepSummary): string {
       : s.exitCode === 4
         ? s.claims.some((c) => c.outcome === 'incomplete')
           ? 'incomplete: part of the requested classes is unchecked (see "unfinished" above); nothing is claimed to hold'
-          : 'nothing to check: the family is empty within its bounds'
+          : s.claims.some((c) => c.stopReason !== 'finished')
+            ? `stopped before the shard was done (${s.claims.map((c) => c.stopReason.replace(/_/g, ' ')).join(', ')}); run the same command again to resume`
+            : 'nothing to check: the family is empty within its bounds'
         : 'holds on every requested class';
   return [...s.claims.flatMap(claimText), `store: ${s.db}`, `result: ${verdict} (${seconds(s.elapsedMs)})`].join('\n');
 }
