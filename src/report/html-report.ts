@@ -21,20 +21,46 @@ function secondsText(s: number | null): string {
   return s < 120 ? `${s.toFixed(1)} s` : `${(s / 60).toFixed(1)} min`;
 }
 
+function permutationCell(c: ReportClass): string {
+  const p = c.permutations;
+  if (!p) return '';
+  const list = p.common.length ? p.common.slice(0, 4).map((x) => `<code>${escapeXml(x)}</code>`).join(' ') + (p.common.length > 4 ? ` +${p.common.length - 4}` : '') : 'none';
+  const notes = [p.incomplete ? 'class incomplete: unchecked instances may rule some out' : '', p.truncated ? 'an instance had more than 720 permutations; only 720 kept, so more may serve all' : ''].filter(Boolean);
+  return `<td>${list}${notes.map((n) => `<br><small>${n}</small>`).join('')}</td>`;
+}
+
 function classTable(classes: readonly ReportClass[]): string {
+  const withPerms = classes.some((c) => c.permutations);
   const rows = classes.map(
     (c) =>
-      `<tr data-class="${escapeXml(c.key)}"><td>${escapeXml(c.key)}</td><td><code>${c.lengths.join(',')}</code></td><td class="num">${fmt(c.instances)}</td><td class="num">${fmt(c.checked)}</td><td class="num">${fmt(c.holds)}</td><td class="num">${fmt(c.counterexamples)}</td><td class="num">${secondsText(c.seconds)}</td><td class="status-${c.status}">${c.status}${c.method === 'modular' ? ' (modular)' : ''}</td></tr>`,
+      `<tr data-class="${escapeXml(c.key)}"><td>${escapeXml(c.key)}</td><td><code>${c.lengths.join(',')}</code></td><td class="num">${fmt(c.instances)}</td><td class="num">${fmt(c.checked)}</td><td class="num">${fmt(c.holds)}</td><td class="num" data-nonzero>${c.nonzero === null || c.nonzero === undefined ? '–' : fmt(c.nonzero)}</td><td class="num">${fmt(c.counterexamples)}</td><td class="num">${secondsText(c.seconds)}</td><td class="status-${c.status}">${c.status}${c.method === 'modular' ? ' (modular)' : ''}</td>${withPerms ? permutationCell(c) || '<td></td>' : ''}</tr>`,
   );
-  return `<table><thead><tr><th>class</th><th>side lengths</th><th class="num">instances</th><th class="num">checked</th><th class="num">holds</th><th class="num">counterexamples</th><th class="num">time</th><th>status</th></tr></thead><tbody>${rows.join('')}</tbody></table>`;
+  return `<table><thead><tr><th>class</th><th>side lengths</th><th class="num">instances</th><th class="num">checked</th><th class="num">holds</th><th class="num">of which nonzero</th><th class="num">counterexamples</th><th class="num">time</th><th>status</th>${withPerms ? '<th>permutations serving the whole class</th>' : ''}</tr></thead><tbody>${rows.join('')}</tbody></table>`;
+}
+
+// Every symbol the report uses, defined once.
+function symbolsHtml(data: ReportData): string {
+  const items = [
+    '<dt>b, T(b)</dt><dd>a boundary of the family, and its image under the claim\'s transform</dd>',
+    '<dt>L, R</dt><dd>L is the measure of b in the claim\'s theory; R is the measure of T(b), each exactly what <code>puzzlesweep count</code> prints for that boundary</dd>',
+    data.claim.relation ? `<dt>claim</dt><dd>${escapeXml(data.claim.relation)} for every b; a counterexample has ${escapeXml(data.claim.failure ?? 'L ≠ R')}</dd>` : '',
+    data.counterexamples.some((c) => c.substituted) || /σ/.test(data.claim.relation ?? '')
+      ? '<dt>σ(R)</dt><dd>R with y<sub>m</sub> replaced by y<sub>σ(m)</sub>; rev[p..q] maps y<sub>m</sub> to y<sub>p+q−m</sub> for p ≤ m ≤ q; shift[p..q] by s maps y<sub>m</sub> to y<sub>p+(m−p+s) mod (q−p+1)</sub>; (i j k) is a cycle</dd>'
+      : '',
+    '<dt>holds, of which nonzero</dt><dd>boundaries where the relation holds; "nonzero" counts those where some compared value is not 0 (the others hold vacuously, 0 = 0)</dd>',
+    '<dt>found through its pair</dt><dd>for an involution T, b and T(b) are decided by one comparison; both are listed when it fails</dd>',
+  ];
+  return `<h2>Symbols</h2><dl class="symbols">${items.filter(Boolean).join('')}</dl>`;
 }
 
 function tally(data: ReportData): string {
   const checked = data.classes.reduce((s, c) => s + c.checked, 0n);
   const verified = data.classes.filter((c) => c.status === 'verified').length;
+  const holds = data.classes.reduce((s, c) => s + c.holds, 0n);
+  const nonzero = data.classes.every((c) => c.nonzero !== null && c.nonzero !== undefined) ? fmt(data.classes.reduce((s, c) => s + (c.nonzero ?? 0n), 0n)) : '–';
   const n = data.counterexamples.length;
   const verdict = n ? '<div class="bad"><strong>refuted</strong>by a confirmed counterexample</div>' : '<div class="ok"><strong>no counterexample</strong>in the swept classes</div>';
-  return `<section class="tally">${verdict}<div><strong>${fmt(checked)}</strong>instances checked</div><div><strong>${verified} / ${data.classes.length}</strong>classes verified</div><div><strong>${fmt(n)}</strong>counterexamples</div></section>`;
+  return `<section class="tally">${verdict}<div><strong>${fmt(checked)}</strong>instances checked</div><div><strong>${fmt(holds)}</strong>hold, ${nonzero} with a nonzero value</div><div><strong>${verified} / ${data.classes.length}</strong>classes verified</div><div><strong>${fmt(n)}</strong>counterexamples</div></section>`;
 }
 
 // How a counterexample's two values fail the claim's relation: ≠ for equalities, > for ≤, < for ≥.
@@ -64,9 +90,10 @@ export function renderHtmlReport(data: ReportData, options: HtmlReportOptions = 
     classes.length ? `<div class="classes">${classTable(classes)}${classChartSvg(classes)}</div>` : '<p class="note">no class swept yet</p>',
     `<h2>Counterexamples${cxs.length ? `, smallest first` : ''}</h2>`,
     cxs.length ? '' : '<p class="note">none found</p>',
-    ...shown.map((c, k) => counterexampleCardHtml(c, k + 1, resolve, options.puzzleLimit ?? 24, failureSymbol(claim.json))),
+    ...shown.map((c, k) => counterexampleCardHtml(c, k + 1, resolve, options.puzzleLimit ?? 24, claim.failure ?? failureSymbol(claim.json))),
     rest.length ? `<h2>${fmt(rest.length)} more counterexamples</h2>${counterexampleTableHtml(rest, drawCount + 1)}` : '',
-    `<h2>Claim</h2><details open><summary>claim JSON</summary><pre>${escapeXml(JSON.stringify(claim.json, null, 2))}</pre></details>`,
+    symbolsHtml(data),
+    `<h2>Claim</h2><details open><summary>the claim as written</summary><pre>${escapeXml(JSON.stringify(claim.json, null, 2))}</pre></details>`,
     `<footer>puzzlesweep report${data.generatedAt ? ` · data read ${escapeXml(data.generatedAt)}` : ''} · puzzle drawings: pieces filled by kind, boundary labels outside the region in clockwise order, rhombus weights y<sub>j</sub> − y<sub>i</sub>, K-piece signs in discs</footer>`,
   ];
   return [

@@ -12,8 +12,12 @@ export interface ReportData {
 export interface ReportClaim {
   readonly id: string;
   readonly statement: string;
-  /** The claim as stored (canonical JSON, parsed). */
+  /** The claim as the user wrote it (the canonical JSON for stores that did not keep it). */
   readonly json: unknown;
+  /** The relation as a formula in L (left value) and R (right value), e.g. `L = σ(R), σ = rev[1..a]`. */
+  readonly relation?: string;
+  /** How a failing instance reads, e.g. `L ≠ σ(R)`. */
+  readonly failure?: string;
   /** Theory names, e.g. `cohomology` or `cohomology → k-theory` when the two sides differ. */
   readonly theory: string;
   /** The family in words, e.g. `sides n,0,n,0,n,0 with 1 ≤ n ≤ 4`. */
@@ -27,13 +31,19 @@ export interface ReportClass {
   /** Instances of the class and, of those, how many were checked so far. */
   readonly instances: bigint;
   readonly checked: bigint;
+  /** Boundaries that hold; of those, with some compared value nonzero (null: not counted by an older store). */
   readonly holds: bigint;
+  readonly nonzero?: bigint | null;
+  /** Boundaries skipped because their value is 0 (`nonzeroOnly`). */
+  readonly skipped?: bigint;
   readonly counterexamples: number;
   /** Summed sweep time of the class, in seconds (null when the store has none). */
   readonly seconds: number | null;
   /** `verified`: complete without counterexample; `refuted`: has one; `partial`: not fully swept. */
   readonly status: 'verified' | 'refuted' | 'partial';
   readonly method?: 'exact' | 'modular';
+  /** "Up to some permutation" claims: permutations serving every instance checked, in block/cycle notation. */
+  readonly permutations?: { readonly common: readonly string[]; readonly truncated: boolean; readonly incomplete: boolean };
 }
 
 /** One side of a comparison: a boundary in a theory and its value as canonical text. */
@@ -50,7 +60,12 @@ export interface ReportCounterexample {
   /** Total boundary length (the sweep's size order). */
   readonly size: number;
   readonly left: ReportBoundary;
+  /** T(b) with its own value (what `count` prints). */
   readonly right: ReportBoundary;
+  /** Substitution relations: σ(right value), the value compared, and σ written out. */
+  readonly substituted?: { readonly value: string; readonly sigma: string | null };
+  /** Found through its pair: the index of the representative whose comparison decided it. */
+  readonly partnerOf?: bigint;
   readonly permutation?: readonly number[];
 }
 

@@ -17,6 +17,8 @@ export interface SweepClaim {
   readonly canonicalJson: string;
   readonly fingerprint: string;
   readonly engineVersion: string;
+  /** The claim as the user wrote it (JSON text), kept for reports. */
+  readonly sourceJson?: string | undefined;
   /** The claim file it came from, for replay commands. */
   readonly file?: string | undefined;
 }

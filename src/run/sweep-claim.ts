@@ -67,7 +67,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   const began = Date.now();
   const { db, options } = ctx;
   const method: SweepMethod = options.exact ? 'exact' : 'modular';
-  saveClaim(db, { fingerprint: claim.fingerprint, claimId: claim.id, canonicalJson: claim.canonicalJson, engineVersion: claim.engineVersion, sourceFile: claim.file });
+  saveClaim(db, { fingerprint: claim.fingerprint, claimId: claim.id, canonicalJson: claim.canonicalJson, engineVersion: claim.engineVersion, sourceFile: claim.file, sourceJson: claim.sourceJson });
   reapDeadRuns(db);
   const sharded = shardPlan(plan, options);
   const runId = startRun(db, claim.fingerprint, { ...options, file: claim.file ?? null, ...(sharded ? { shard: sharded.record } : {}) });

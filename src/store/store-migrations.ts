@@ -162,4 +162,8 @@ export const STORE_MIGRATIONS: readonly string[] = [
   DELETE FROM claims WHERE fingerprint IN (SELECT old FROM rekey);
   DROP TABLE rekey;
   `,
+  // 6 (issue 7): the claim as the user last wrote it (JSON text; NULL for claims stored before), for reports.
+  `
+  ALTER TABLE claims ADD COLUMN source_json TEXT;
+  `,
 ];
