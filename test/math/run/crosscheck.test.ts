@@ -41,4 +41,10 @@ describe('engine against independent references', () => {
     expect(s.agreements).toBeLessThan(s.triples);
     expect(s.firstDisagreement).toMatchObject({ lambda: '010', mu: '010', nu: '100', reference: 't2*t3^-1' });
   });
+
+  it('equivariant K-theory: the rhombus-weighted piece set = localization on every triple with n ≤ 6 [isobaric divided differences; Kostant–Kumar 1990]', () => {
+    const s = crosscheck({ theory: 'equivariant-k-theory', maxN: 6, pieces: resolveTheory('conjectures/pieces/equivariant-k-theory-rhombi.json') });
+    expect(s.triples).toBe(tripleCount(6));
+    expect(s.firstDisagreement).toBeUndefined();
+  });
 });
