@@ -35,7 +35,7 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
   const leftMeter = new Meter(compiled.left, measure, names, tuning.cacheSize);
   const rightMeter = new Meter(compiled.right, measure, names, tuning.cacheSize);
   // A formula claim builds both sides from b itself (exactly; no transform, no pairing).
-  const formula = compiled.formula ? new FormulaMeter(compiled.formula, measure, names, compiled.left.boundaryLabels) : undefined;
+  const formula = compiled.formula ? new FormulaMeter(compiled.formula, measure, names, compiled.left.boundaryLabels, compiled.polynomial) : undefined;
   const sameTheory = claim.compare.rightTheory === undefined || JSON.stringify(claim.compare.rightTheory) === JSON.stringify(claim.theory);
   // {b, T(b)} is checked once when T is an involution and the comparison is symmetric.
   const involutive = (tuning.pairing ?? true) && !formula && program.involutive && sameTheory && program.relation.symmetric;

@@ -1,4 +1,4 @@
-import type { PieceSet } from '../../engine/index.js';
+import { constantPoly, toBigInt, type PieceSet } from '../../engine/index.js';
 import type { Measure } from '../claim-schema.js';
 import { Meter, type Value } from '../measure.js';
 import type { CompiledFormula, CompiledTerm } from './compile-formula.js';
@@ -20,6 +20,8 @@ export class FormulaMeter {
     measure: Measure,
     names: readonly string[],
     private readonly alphabet: readonly string[],
+    /** Values are polynomials: an empty sum (the integer 0) is then the zero polynomial. */
+    private readonly polynomial: boolean,
   ) {
     for (const [name, pieces] of formula.theories) {
       this.meters.set(name, new Meter(pieces as PieceSet, measure, names));
@@ -47,7 +49,8 @@ export class FormulaMeter {
   side(terms: readonly CompiledTerm[], sides: readonly string[], variables: Readonly<Record<string, number>>, useCache = true): Value {
     // A confirmation recomputes every value by itself, without the open-side-5 shortcut.
     const side5Of = useCache ? (theory: string, lengths: readonly number[], s: readonly string[]) => this.meters.get(theory)!.side5Values(lengths, s) : undefined;
-    return evaluateTerms(terms, sides, variables, this.valueOf(useCache), this.alphabet, side5Of);
+    const v = evaluateTerms(terms, sides, variables, this.valueOf(useCache), this.alphabet, side5Of);
+    return this.polynomial && v.kind === 'int' ? { kind: 'poly', v: constantPoly(toBigInt(v.v)) } : v;
   }
 
   get left(): readonly CompiledTerm[] | undefined {

@@ -3,7 +3,7 @@ import { createEvaluator, parseClaim, planClaim, type ClaimInput } from '../../.
 import { evaluateTerms } from '../../../src/claims/formula/evaluate-formula.js';
 import { AppError } from '../../../src/errors.js';
 import { naiveCount } from '../../../src/reference/naive-count.js';
-import { cohomologyPieces } from '../reference/puzzle-pieces.js';
+import { cohomologyPieces, equivariantPieces } from '../reference/puzzle-pieces.js';
 
 const rhombus = (right: object, over: Partial<ClaimInput> = {}): unknown => ({
   id: 'formula-test',
@@ -112,5 +112,21 @@ describe('formula claims: sums read off one open-side-5 sweep', () => {
       }
     }
     expect(nonzero).toBeGreaterThan(10);
+  });
+});
+
+describe('formula claims: polynomial theories', () => {
+  it('an empty sum is the zero polynomial: a boundary with no puzzle on either side holds (equivariant, n = 1)', () => {
+    const claim = parseClaim(rhombus(split, { theory: 'equivariant', family: { sides: ['n', 'n', 0, 'n', 'n', 0], variables: [{ name: 'n', min: 1, max: 1 }] } }));
+    const plan = planClaim(claim);
+    const evaluator = createEvaluator(claim, { exact: true });
+    const cls = plan.classes()[0]!;
+    const sides = ['1', '1', '', '1', '0', ''];
+    // Independent values by plain backtracking: no puzzle fills the rhombus, nor any pair of its triangles.
+    const count = (s: string[]) => naiveCount(s.map((x) => x.length), s, equivariantPieces()).fillings;
+    expect(count(sides)).toBe(0n);
+    for (const eta of ['0', '1']) expect(count(['1', '', eta, '', '0', '']) * count(['', '1', '', '1', '', eta])).toBe(0n);
+    const r = evaluator.evaluate({ classKey: cls.key, index: plan.indexOf(cls, sides)!, sides });
+    expect(r.status).toBe('holds');
   });
 });
