@@ -13,6 +13,7 @@ import { structureTable } from './products/parallel-table.js';
 import { parsePartition, partitionOfString, partitionText, stringOfPartition, type Grassmannian } from './products/partition-strings.js';
 import { productJson, tableJson } from './products/table-formats.js';
 import type { ValueForm } from './report/root-form.js';
+import type { CountJson, ProductJson, TableJson } from './products/json-types.js';
 import { countJson, JSON_FORMAT_VERSION } from './report/value-json.js';
 import { loadSweepClaim } from './run/load-sweep-claim.js';
 import { parseRunOptions, type RunOptionsInput } from './run/run-options.js';
@@ -22,6 +23,7 @@ import { regionOfSides } from './claims/count-region.js';
 
 export { AppError, JSON_FORMAT_VERSION, partitionOfString, partitionText, parsePartition, stringOfPartition };
 export type { Claim, Grassmannian, PieceSet, Puzzle, SweepSummary, ValueForm };
+export type { CountJson, JsonInteger, PartitionsJson, ProductJson, TableJson, TermJson, ValueJson } from './products/json-types.js';
 
 /** A theory name (`cohomology`, `equivariant`, `k-theory`, `dual-k-theory`), a piece-set JSON path, or a piece set. */
 export type TheoryInput = string | PieceSet;
@@ -46,32 +48,32 @@ function classString(c: ClassInput, g: readonly [number, number] | undefined, na
 }
 
 /** The value of c_{λμ}^ν (the `count --json` object) for classes given as strings or partitions. */
-export function count(options: ClassesOptions & { readonly lambda: ClassInput; readonly mu: ClassInput; readonly nu: ClassInput }): object {
+export function count(options: ClassesOptions & { readonly lambda: ClassInput; readonly mu: ClassInput; readonly nu: ClassInput }): CountJson {
   const g = options.grassmannian;
   const [l, m, n] = [classString(options.lambda, g, 'lambda'), classString(options.mu, g, 'mu'), classString(options.nu, g, 'nu')];
-  return countJson(countRegion(theoryOf(options.theory), structureConstantSides(l, m, n)), options.form, { lambda: l, mu: m, nu: n });
+  return countJson(countRegion(theoryOf(options.theory), structureConstantSides(l, m, n)), options.form, { lambda: l, mu: m, nu: n }) as CountJson;
 }
 
 /** The value of any region given by its six clockwise side strings (the `count --sides … --json` object). */
-export function countSides(options: { readonly theory: TheoryInput; readonly sides: readonly string[]; readonly completed?: boolean; readonly form?: ValueForm }): object {
-  return countJson(countRegion(theoryOf(options.theory), options.sides, { completed: options.completed ?? false }), options.form);
+export function countSides(options: { readonly theory: TheoryInput; readonly sides: readonly string[]; readonly completed?: boolean; readonly form?: ValueForm }): CountJson {
+  return countJson(countRegion(theoryOf(options.theory), options.sides, { completed: options.completed ?? false }), options.form) as CountJson;
 }
 
 /** The whole product σ_λ·σ_μ (the `expand --json` object): every ν with a nonzero structure constant. */
-export function expand(options: ClassesOptions & { readonly lambda: ClassInput; readonly mu: ClassInput }): object {
+export function expand(options: ClassesOptions & { readonly lambda: ClassInput; readonly mu: ClassInput }): ProductJson {
   const g = options.grassmannian;
   const l = classString(options.lambda, g, 'lambda');
   const m = classString(options.mu, g, 'mu');
   const grassmannian = /^[01]*$/.test(l) ? { k: [...l].filter((c) => c === '1').length, n: l.length } : undefined;
-  return productJson(expandProduct(theoryOf(options.theory), l, m), options.form ?? 'roots', grassmannian);
+  return productJson(expandProduct(theoryOf(options.theory), l, m), options.form ?? 'roots', grassmannian) as ProductJson;
 }
 
 /** Every nonzero structure constant of Gr(k, n) (the `table --format json` object). */
-export async function table(options: { readonly theory: TheoryInput; readonly grassmannian: readonly [number, number]; readonly form?: ValueForm; readonly workers?: number }): Promise<object> {
+export async function table(options: { readonly theory: TheoryInput; readonly grassmannian: readonly [number, number]; readonly form?: ValueForm; readonly workers?: number }): Promise<TableJson> {
   const pieces = theoryOf(options.theory);
   const g: Grassmannian = { k: options.grassmannian[0], n: options.grassmannian[1] };
   const rows = await structureTable(pieces, g, { workers: options.workers ?? 1 });
-  return tableJson(pieces.name, g, rows, options.form ?? 'roots');
+  return tableJson(pieces.name, g, rows, options.form ?? 'roots') as TableJson;
 }
 
 /** Every puzzle of a boundary, lazily: six clockwise side strings, or `triangle: [λ, μ, ν]` (ν read left to right). */
