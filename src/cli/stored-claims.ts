@@ -1,18 +1,9 @@
 import { existsSync, statSync } from 'node:fs';
 import { AppError } from '../errors.js';
 import { loadSweepClaim } from '../run/load-sweep-claim.js';
-import { findClaims, openStore, type ClaimRecord, type Store } from '../store/index.js';
+import { findClaims, type ClaimRecord, type Store } from '../store/index.js';
 
-/** Opens an existing store for reading; a missing file is an input error, never a new empty store. */
-export function openExistingStore(path: string): Store {
-  if (!existsSync(path)) {
-    throw new AppError('file_not_found', `Store: expected an existing SQLite file, received '${path}'`, {
-      path: '--db',
-      hint: "run 'puzzlesweep run <claim.json>' first, or point --db at your store",
-    });
-  }
-  return openStore(path, { readonly: true });
-}
+export { openExistingStore } from './open-existing-store.js';
 
 /**
  * The stored versions of a claim named by file (its current fingerprint only), by id (every version,

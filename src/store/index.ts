@@ -12,3 +12,5 @@ export * from './discover-evidence-records.js';
 export * from './merge-stores.js';
 export * from './class-tallies.js';
 export * from './store-fault.js';
+export * from './class-progress.js';
+export * from './process-identity.js';
