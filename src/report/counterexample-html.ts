@@ -55,11 +55,12 @@ export function counterexampleCardHtml(c: ReportCounterexample, number: number, 
   ].join('\n');
 }
 
-/** The counterexamples not drawn, one table row each. */
+/** The counterexamples not drawn, one table row each; σ(R) gets a column when the relation substitutes. */
 export function counterexampleTableHtml(rest: readonly ReportCounterexample[], firstNumber: number): string {
+  const sigma = rest.some((c) => c.substituted);
   const rows = rest.map(
     (c, k) =>
-      `<tr data-listed="${firstNumber + k}"><td class="num">${firstNumber + k}</td><td>${escapeXml(c.classKey)}</td><td class="num">${c.index}</td><td>${sidesHtml(c.left.sides)}</td><td class="value">${valueHtml(c.left.value)}</td><td>${sidesHtml(c.right.sides)}</td><td class="value">${valueHtml(c.right.value)}</td></tr>`,
+      `<tr data-listed="${firstNumber + k}"><td class="num">${firstNumber + k}</td><td>${escapeXml(c.classKey)}</td><td class="num">${c.index}${c.partnerOf !== undefined ? ` <small>(pair of ${c.partnerOf})</small>` : ''}</td><td>${sidesHtml(c.left.sides)}</td><td class="value">${valueHtml(c.left.value)}</td><td>${sidesHtml(c.right.sides)}</td><td class="value">${valueHtml(c.right.value)}</td>${sigma ? `<td class="value">${c.substituted ? valueHtml(c.substituted.value) : ''}</td>` : ''}</tr>`,
   );
-  return `<table class="rest"><thead><tr><th class="num">#</th><th>class</th><th class="num">instance</th><th>claimed boundary</th><th>value</th><th>compared boundary</th><th>value</th></tr></thead><tbody>${rows.join('')}</tbody></table>`;
+  return `<table class="rest"><thead><tr><th class="num">#</th><th>class</th><th class="num">instance</th><th>b</th><th>L</th><th>T(b)</th><th>R</th>${sigma ? '<th>σ(R)</th>' : ''}</tr></thead><tbody>${rows.join('')}</tbody></table>`;
 }
