@@ -2,7 +2,7 @@
  * `npm run bench`: runs every `*-benchmark.ts` module in this folder (each default-exports an async
  * function returning a markdown section) and writes test/bench/results.md with the machine's details.
  */
-import { readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { availableParallelism, cpus, totalmem } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -29,5 +29,12 @@ const header = [
   '',
 ].join('\n');
 const out = join(here, 'results.md');
-writeFileSync(out, `${header}\n${sections.join('\n\n')}\n`);
+// `npm run bench -- engine` reruns some modules: their sections replace the stored ones with the same
+// heading, and the other modules' sections are kept as they were measured.
+const heading = (section: string) => section.split('\n', 1)[0]!;
+const stored = existsSync(out) && only.length > 0 ? readFileSync(out, 'utf8').split(/^(?=## )/m).slice(1).map((x) => x.trimEnd()) : [];
+const fresh = new Map(sections.map((x) => [heading(x), x]));
+const merged = stored.map((x) => fresh.get(heading(x)) ?? x);
+for (const x of sections) if (!stored.some((y) => heading(y) === heading(x))) merged.push(x);
+writeFileSync(out, `${header}\n${merged.join('\n\n')}\n`);
 process.stderr.write(`wrote ${out}\n`);
