@@ -2,6 +2,8 @@ import { hostname } from 'node:os';
 import type { CommandModule } from 'yargs';
 import { AppError } from '../../errors.js';
 import {
+  classTallies,
+  type ClassTally,
   findClaims,
   freeRun,
   listCounterexamples,
@@ -68,13 +70,29 @@ async function claimStatus(db: Store, c: ClaimRecord, dbArg: string) {
       free: h.gone !== undefined ? freeHint(h.runId) : null,
     })),
     counterexamples: counterexamples.length,
+    // Boundaries over every run: holding (of which with a nonzero value; null when an older store did not count it), failing.
+    tallies: totalsOf(classTallies(db, c.fingerprint)),
     smallestCounterexample: counterexamples[0] ? { classKey: counterexamples[0].classKey, index: counterexamples[0].index.toString(), size: counterexamples[0].size } : null,
     lastRun: last ?? null,
   };
 }
 
+function totalsOf(t: Map<string, ClassTally>) {
+  let [checked, holds, fails, vacuous, nonzero] = [0, 0, 0, 0, 0 as number | null];
+  for (const x of t.values()) {
+    checked += x.checked;
+    holds += x.holds;
+    fails += x.fails;
+    vacuous += x.vacuous;
+    nonzero = nonzero === null || x.nonzero === null ? null : nonzero + x.nonzero;
+  }
+  return { checked, holds, nonzero, vacuous, fails };
+}
+
 function statusText(s: Awaited<ReturnType<typeof claimStatus>>): string {
   const lines = [`${s.claimId}  (fingerprint ${s.fingerprint.slice(0, 12)}, engine ${s.engineVersion}${s.file ? `, ${s.file}` : ''})`];
+  const t = s.tallies;
+  lines.push(`  boundaries: ${t.checked} checked, ${t.holds} hold (${t.nonzero === null ? 'nonzero not counted by an older store' : `${t.nonzero} nonzero, ${t.vacuous} vacuous: both values 0`}), ${t.fails} fail`);
   lines.push(`  verified classes: ${s.verified.length ? s.verified.map((v) => `${v.classKey} [${v.method}]`).join('; ') : 'none'}`);
   if (s.incomplete.length) {
     lines.push(`  incomplete classes: ${s.incomplete.map((p) => `${p.classKey} (${p.done}${p.instances ? ` of ${p.instances}` : ''} done)`).join('; ')}; run the claim again to finish them`);
