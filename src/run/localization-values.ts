@@ -1,5 +1,6 @@
-import { constantPoly, divideFraction, fractionOf, mulFraction, type Fraction, type Polynomial, type StripLetter } from '../engine/index.js';
+import { divideFraction, fractionOf, type Fraction, type Polynomial, type StripLetter } from '../engine/index.js';
 import { AppError } from '../errors.js';
+import type { Product } from '../products/expand-product.js';
 import { kLocalizationTable } from '../reference/k-localization.js';
 import type { RefFraction } from '../reference/ref-fraction.js';
 import type { RefLaurent } from '../reference/ref-laurent.js';
@@ -45,7 +46,7 @@ function fromChernFraction(v: RefFraction): Fraction {
     const factor = poly([{ coeff: 1n, exps: [] }, { coeff: 1n, exps: exps(j) }, { coeff: -1n, exps: exps(i) }]);
     for (let m = 0; m < e; m++) acc = divideFraction(acc, fractionOf(factor));
   }
-  return mulFraction(acc, fractionOf(constantPoly(1n)));
+  return acc;
 }
 
 /**
@@ -70,4 +71,20 @@ export function localizationValue(theory: LocalizationTheory, lambda: string, mu
     throw new AppError('invalid_argument', `--triangle: expected three 0/1 strings of one Gr(k, n), received ${lambda},${mu},${nu}`, { path: '--triangle' });
   }
   return localizationValues(theory, ones(lambda), n, [lambda, mu]).get(`${lambda},${mu},${nu}`) ?? fractionOf(new Map());
+}
+
+/** The whole product σ_λ·σ_μ by localization, in the form `expand` prints (ν in lexicographic order). */
+export function localizationProduct(theory: LocalizationTheory, lambda: string, mu: string): Product {
+  const ones = (s: string) => [...s].filter((c) => c === '1').length;
+  const n = lambda.length;
+  if (mu.length !== n || ones(mu) !== ones(lambda) || !/^[01]+$/.test(lambda + mu)) {
+    throw new AppError('invalid_argument', `--triangle: expected two 0/1 strings of one Gr(k, n), received ${lambda},${mu}`, { path: '--triangle' });
+  }
+  const prefix = `${lambda},${mu},`;
+  const letter = localizationLetter(theory);
+  const products = [...localizationValues(theory, ones(lambda), n, [lambda, mu])]
+    .filter(([key]) => key.startsWith(prefix))
+    .map(([key, value]) => ({ nu: key.slice(prefix.length), value: { type: 'fraction' as const, value, size: n, letter, variableNames: [] as string[] } }))
+    .sort((a, b) => (a.nu < b.nu ? -1 : a.nu > b.nu ? 1 : 0));
+  return { theory, lambda, mu, products };
 }
