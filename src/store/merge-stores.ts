@@ -71,13 +71,27 @@ function readCoverage(db: Store, into: CoverMap): void {
   }
 }
 
-function readCounterexamples(db: Store): { all: Set<string>; standing: { key: string; fingerprint: string; classKey: string; index: bigint }[] } {
+/**
+ * A stored counterexample and the instance whose evaluation found it: itself, or for a row found through its
+ * pair (`partner_of`), the pair's representative. A store that finished the representative must hold the row.
+ */
+interface FoundCounterexample {
+  readonly key: string;
+  readonly fingerprint: string;
+  readonly classKey: string;
+  readonly index: bigint;
+  readonly foundAt: bigint;
+}
+
+function readCounterexamples(db: Store): { all: Set<string>; standing: FoundCounterexample[] } {
   const all = new Set<string>();
-  const standing: { key: string; fingerprint: string; classKey: string; index: bigint }[] = [];
-  for (const r of db.prepare('SELECT fingerprint, class_key, instance_index, recheck FROM counterexamples').safeIntegers(true).iterate() as Iterable<Row>) {
+  const standing: FoundCounterexample[] = [];
+  const partner = tableShape(db, 'counterexamples')?.columns.includes('partner_of') ? 'partner_of' : 'NULL AS partner_of';
+  for (const r of db.prepare(`SELECT fingerprint, class_key, instance_index, recheck, ${partner} FROM counterexamples`).safeIntegers(true).iterate() as Iterable<Row>) {
     const key = `${r.fingerprint as string}|${r.class_key as string}|${r.instance_index as bigint}`;
     all.add(key);
-    if (r.recheck !== 'holds') standing.push({ key, fingerprint: r.fingerprint as string, classKey: r.class_key as string, index: r.instance_index as bigint });
+    const index = r.instance_index as bigint;
+    if (r.recheck !== 'holds') standing.push({ key, fingerprint: r.fingerprint as string, classKey: r.class_key as string, index, foundAt: (r.partner_of as bigint | null) ?? index });
   }
   return { all, standing };
 }
@@ -245,13 +259,16 @@ function copyChunks(target: Store, targetName: string, shape: TableShape, source
   }
 }
 
-/** An instance one store found failing must not lie in another store's finished chunk that has no such counterexample. */
+/**
+ * An instance one store found failing must not have been evaluated by another store (a finished chunk holding
+ * it, or for a partner row its pair's representative) without that store holding the same counterexample.
+ */
 function crossCheck(covers: Map<string, CoverMap>, cxs: Map<string, ReturnType<typeof readCounterexamples>>, conflicts: MergeConflict[]): void {
   for (const [holder, { standing }] of cxs) {
     for (const x of standing) {
       for (const [other, cover] of covers) {
         if (other === holder || cxs.get(other)!.all.has(x.key)) continue;
-        if (cover.get(x.fingerprint, x.classKey)?.has(x.index)) {
+        if (cover.get(x.fingerprint, x.classKey)?.has(x.foundAt)) {
           conflicts.push({ table: 'counterexamples', key: `${x.classKey}:${x.index}`, stores: [holder, other], detail: `a counterexample in ${holder}, but ${other} finished it and found it holds` });
         }
       }

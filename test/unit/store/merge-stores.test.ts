@@ -194,6 +194,23 @@ describe('merging shard stores (definitions of merge; common practice, no source
     );
   });
 
+  it('accepts a partner row found through its pair in another shard, and checks it where the pair was evaluated', () => {
+    // Pair {p, x} with p < x: the shard holding p evaluates both and stores x marked partner_of p; the shard
+    // holding x only counts it as paired (the claims layer's rule for involutions).
+    const [first, second] = shardRanges(CLASSES, { index: 0, count: 2 }).filter((r) => r.classKey === 'n=3').concat(shardRanges(CLASSES, { index: 1, count: 2 }).filter((r) => r.classKey === 'n=3'));
+    expect(first && second).toBeTruthy(); // class n=3 is split between the two shards
+    const p = first!.start;
+    const x = fails('n=3', second!.start) ? second!.start + 1n : second!.start;
+    const a = shardStore(0, 2);
+    const b = shardStore(1, 2);
+    a.prepare(`INSERT INTO counterexamples (fingerprint, class_key, instance_index, size, lengths, left_theory, left_sides, left_value, left_json, right_theory, right_sides, right_value, right_json, confirmed_exact, found_run, partner_of)
+      SELECT fingerprint, 'n=3', ?, size, lengths, left_theory, left_sides, left_value, left_json, right_theory, right_sides, right_value, right_json, 1, found_run, ? FROM counterexamples LIMIT 1`).run(x, p);
+    expect(() => mergeStores(openStore(':memory:'), 't', [{ name: 'a', db: a }, { name: 'b', db: b }])).not.toThrow();
+    // A store that evaluated the representative p itself but lacks the partner row disagrees.
+    const c = shardStore(0, 2);
+    expect(() => mergeStores(openStore(':memory:'), 't', [{ name: 'a', db: a }, { name: 'c', db: c }])).toThrow(expect.objectContaining({ code: 'merge_conflict' }));
+  });
+
   it('keeps one copy of duplicated chunks and reports them', () => {
     const copy = shardStore(2, N);
     const target = openStore(':memory:');
