@@ -57,7 +57,9 @@ const HEARTBEAT_MS = 5_000;
 // A class that reopens this often without a single new lease has a coverage the leaser cannot see: a bug.
 const MAX_IDLE_REOPENS = 3;
 
-const sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, Math.max(0, ms)).unref());
+// Not unref'd: while this run only waits for a peer's lease, this timer is all that keeps the process alive
+// (an unref'd one let Node exit with status 13, an unsettled top-level await, mid-sweep).
+const sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, Math.max(0, ms)));
 
 /**
  * Sweeps one claim: re-check stored counterexamples never re-checked, then let the scheduler hand out

@@ -8,7 +8,8 @@ const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-kill-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 const CLAIM = 'conjectures/k-theory-equals-cohomology.json';
-const ARGS = [CLAIM, '--max', 'n=5', '--workers', '2', '--chunk-size', '16', '--json'];
+const SWEEP = [CLAIM, '--max', 'n=5', '--chunk-size', '16', '--json'];
+const ARGS = [...SWEEP, '--workers', '2'];
 
 // The parts of a store that must not depend on how the sweep was cut: verified classes and counterexamples.
 function outcome(db: string) {
@@ -116,10 +117,14 @@ describe('kill -9 and worker crashes (built CLI, real store files)', () => {
   it('two processes sweeping one store at once end with the store of one process, nothing counted twice', async () => {
     const reference = referenceStore();
     const shared = join(dir, 'shared.sqlite');
-    const one = cliAsync(['run', ...ARGS, '--workers', '1', '--db', shared]);
-    const two = cliAsync(['run', ...ARGS, '--workers', '1', '--db', shared]);
-    const codes = await Promise.all([one, two].map((c) => new Promise<number | null>((resolve) => c.on('exit', (code) => resolve(code)))));
-    expect(codes).toEqual([1, 1]);
+    // One worker each (the flag given once: a repeated --workers is not what this test is about).
+    const one = cliAsync(['run', ...SWEEP, '--workers', '1', '--db', shared]);
+    const two = cliAsync(['run', ...SWEEP, '--workers', '1', '--db', shared]);
+    // Both stderr streams go into the failure message, so a rare bad exit can be diagnosed from the CI log.
+    const stderr = ['', ''];
+    [one, two].forEach((c, k) => c.stderr.on('data', (d: Buffer) => (stderr[k] += d.toString())));
+    const codes = await Promise.all([one, two].map((c) => new Promise<number | null>((resolve) => c.on('close', (code) => resolve(code)))));
+    expect(codes, `stderr of the two runs:\n${stderr.join('\n---\n')}`).toEqual([1, 1]);
     expect(outcome(shared)).toEqual(outcome(reference));
     expect(tiling(shared)).toEqual(tiling(reference));
     // both runs did part of the work: the chunks were shared, not swept twice
