@@ -21,6 +21,8 @@ export const RunOptions = z.object({
   maxCounterexamples: z.number().int().min(1).optional(),
   timeLimit: z.number().positive().optional(),
   exact: z.boolean().default(false),
+  /** `--keep-permutations`: store each instance's permutation too (class-wide intersections are always kept). */
+  keepPermutations: z.boolean().default(false),
   json: z.boolean().default(false),
   /** Instances per chunk: the unit of work, resume and lease (sized by measured work when absent). */
   chunkSize: z.number().int().min(1).max(1_000_000).optional(),

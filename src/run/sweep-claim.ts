@@ -75,7 +75,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   const runId = startRun(db, claim.fingerprint, { ...options, file: claim.file ?? null, ...(sharded ? { shard: sharded.record } : {}) });
   const heartbeat = setInterval(() => touchRun(db, runId), HEARTBEAT_MS);
   heartbeat.unref();
-  const base = { runtimeModule: ctx.runtimeModule, canonicalJson: claim.canonicalJson, fingerprint: claim.fingerprint, exact: options.exact, max: options.max };
+  const base = { runtimeModule: ctx.runtimeModule, canonicalJson: claim.canonicalJson, fingerprint: claim.fingerprint, exact: options.exact, max: options.max, keepPermutations: options.keepPermutations };
   // Each class with the part of it this run sweeps: [first, limit), the whole class unless --shard narrows it.
   const parts = sharded?.classes ?? plan.classes(options.max).map((cls) => ({ cls, first: 0n, limit: plan.instanceCount(cls) }));
   const classes: SizeClass[] = parts.map((p) => p.cls);

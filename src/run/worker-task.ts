@@ -19,7 +19,7 @@ export interface ChunkTask extends TaskBase {
   readonly kind: 'chunk';
   readonly start: bigint;
   readonly end: bigint;
-  /** Store each instance's permutation too (default true); class-wide intersections are always kept. */
+  /** Store each instance's permutation too (default false); class-wide intersections are always kept. */
   readonly keepPermutations?: boolean | undefined;
 }
 

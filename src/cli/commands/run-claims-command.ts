@@ -14,6 +14,7 @@ interface RunArgs {
   workers?: number;
   db: string;
   'stop-at-first': boolean;
+  'keep-permutations': boolean;
   'max-counterexamples'?: number;
   'time-limit'?: number;
   exact: boolean;
@@ -53,6 +54,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
       .option('max-counterexamples', { type: 'number', describe: 'stop handing out work once this many counterexamples are stored' })
       .option('time-limit', { type: 'number', describe: 'stop handing out work after this many seconds' })
       .option('exact', { type: 'boolean', default: false, describe: 'exact polynomials instead of modular identity tests' })
+      .option('keep-permutations', { type: 'boolean', default: false, describe: 'store the permutation found for each instance (the ones serving a whole class are always kept)' })
       .option('json', { type: 'boolean', default: false, describe: 'print the summary as one JSON object, no progress bar' })
       .option('chunk-size', { type: 'number', describe: 'instances per chunk (the unit of resume; default: sized by measured work)' })
       .option('shard', { type: 'string', describe: "sweep only shard i of N (e.g. 0/4), balanced by estimated work; use one --db per shard; exit 4 if unfinished" }) as never,
@@ -66,6 +68,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
         ...(args['max-counterexamples'] !== undefined ? { maxCounterexamples: args['max-counterexamples'] } : {}),
         ...(args['time-limit'] !== undefined ? { timeLimit: args['time-limit'] } : {}),
         exact: args.exact,
+        keepPermutations: args['keep-permutations'],
         json: args.json,
         ...(args['chunk-size'] !== undefined ? { chunkSize: args['chunk-size'] } : {}),
         ...(args.shard !== undefined ? { shard: args.shard } : {}),
