@@ -13,9 +13,8 @@ import { parseBoundaryArgs } from '../boundary-args.js';
 import { runCommand } from '../run-command.js';
 import { openExistingStore, storedClaims } from '../stored-claims.js';
 import { summaryJson } from '../sweep-summary-text.js';
-import { countRegion } from '../../claims/count-region.js';
 import { VALUE_FORMS, type ValueForm } from '../../report/root-form.js';
-import { expandedText, valueText } from '../../report/value-json.js';
+import { valueInForm } from '../value-in-form.js';
 
 interface ReplayArgs {
   claim: string;
@@ -72,20 +71,8 @@ function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
   });
 }
 
-// A polynomial value is shown in the chosen --form when it is the region's own value (the usual measure);
-// other measures (statistics, completed regions) keep their canonical text.
-function valueInForm(m: Measured, pieces: PieceSet, form: ValueForm): string {
-  if (form === 'expanded' || !/y\d/.test(m.text)) return m.text;
-  try {
-    const own = countRegion(pieces, m.sides).value;
-    return expandedText(own) === m.text ? valueText(own, form) : m.text;
-  } catch {
-    return m.text;
-  }
-}
-
 function measuredText(label: string, m: Measured, pieces: PieceSet, limit: number, form: ValueForm, formula = false): string[] {
-  const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${valueInForm(m, pieces, form)}`];
+  const lines = [`${label}: ${m.theory}, side lengths ${m.lengths.join(',')}`, `  sides: ${m.sides.map((s) => s || '-').join(' | ')}`, `  value: ${valueInForm(m.text, m.sides, pieces, form)}`];
   // A formula side is a sum of products of other boundaries' values: b's own puzzles are not its puzzles.
   if (formula) return [...lines, '  (the claim\'s formula evaluated at b: a sum of products of values of other boundaries, so no puzzles are drawn)'];
   let shown = 0;
@@ -119,7 +106,7 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
       .option('db', { type: 'string', default: DEFAULT_STORE_PATH, describe: 'store to read the claim from when given an id' })
       .option('limit', { type: 'number', default: 10, describe: 'draw at most this many puzzles per boundary' })
       .option('json', { type: 'boolean', default: false, describe: 'print one JSON object (no drawings)' })
-      .option('form', { choices: VALUE_FORMS, default: 'roots' as const, describe: 'polynomial values: in z_m = y_{m+1} - y_m when positive there (roots), expanded in y, or factored' }) as never,
+      .option('form', { choices: VALUE_FORMS, default: 'expanded' as const, describe: 'polynomial values: expanded in y (as stored), in z_m = y_{m+1} - y_m when positive there (roots), or factored' }) as never,
   handler: (args) =>
     runCommand(args.json, () => {
       const { id, json } = claimJson(args.claim, args.db);

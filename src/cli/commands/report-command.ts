@@ -3,12 +3,14 @@ import { AppError } from '../../errors.js';
 import { DEFAULT_STORE_PATH } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { writeClaimReport } from '../write-claim-report.js';
+import { VALUE_FORMS, type ValueForm } from '../../report/root-form.js';
 
 interface ReportArgs {
   claim: string;
   db: string;
   out?: string;
   draw: number;
+  form: ValueForm;
 }
 
 export const reportCommand: CommandModule<object, ReportArgs> = {
@@ -19,13 +21,14 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .positional('claim', { type: 'string', describe: 'claim file, id or fingerprint' })
       .option('db', { type: 'string', default: DEFAULT_STORE_PATH, describe: 'SQLite store file' })
       .option('out', { type: 'string', describe: 'HTML file to write (default results/<claim id>.html)' })
-      .option('draw', { type: 'number', default: 6, describe: 'draw this many counterexamples, list the rest' }) as never,
+      .option('draw', { type: 'number', default: 6, describe: 'draw this many counterexamples, list the rest' })
+      .option('form', { choices: VALUE_FORMS, default: 'expanded' as const, describe: 'polynomial values: expanded in y (as stored), in z_m = y_{m+1} - y_m when positive there (roots), or factored' }) as never,
   handler: (args) =>
     runCommand(false, () => {
       if (!Number.isInteger(args.draw) || args.draw < 0) {
         throw new AppError('invalid_argument', `--draw: expected a nonnegative integer, received ${args.draw}`, { path: '--draw' });
       }
-      const { out, found, drawn } = writeClaimReport(args.db, args.claim, { out: args.out, draw: args.draw });
+      const { out, found, drawn } = writeClaimReport(args.db, args.claim, { out: args.out, draw: args.draw, form: args.form });
       process.stdout.write(`wrote ${out} (${found} counterexample${found === 1 ? '' : 's'}, ${drawn} drawn)\n`);
     }),
 };
