@@ -22,17 +22,6 @@ export interface ShardRecord {
   readonly classes: readonly ShardClass[];
 }
 
-/** The shard record of the newest run of each claim in a store that was run with --shard. */
-export function latestShardRecords(db: Store): Map<string, ShardRecord> {
-  const rows = db.prepare('SELECT fingerprint, options_json FROM runs ORDER BY run_id').all() as { fingerprint: string; options_json: string }[];
-  const out = new Map<string, ShardRecord>();
-  for (const r of rows) {
-    const shard = (JSON.parse(r.options_json) as { shard?: ShardRecord }).shard;
-    if (shard && Array.isArray(shard.classes)) out.set(r.fingerprint, shard);
-  }
-  return out;
-}
-
 /** Every shard recorded in a store's runs (a merged store holds many), one per claim and shard index, newest kept. */
 export function allShardRecords(db: Store): { fingerprint: string; record: ShardRecord }[] {
   const rows = db.prepare('SELECT fingerprint, options_json FROM runs ORDER BY run_id').all() as { fingerprint: string; options_json: string }[];
