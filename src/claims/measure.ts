@@ -2,6 +2,7 @@ import {
   countCompletions,
   DEFAULT_PRIMES,
   fillingCountSemiring,
+  formulaDegree,
   generatingSemiring,
   integerSemiring,
   makeRegion,
@@ -42,7 +43,15 @@ const normSemiring: Semiring<SafeInt> = {
   fromInteger: (n) => abs(n),
   variable: () => 1,
   position: () => 2,
+  strip: () => 1,
 };
+
+// The largest total degree of a piece weight, so a value's degree is at most this times the triangle count.
+function weightDegree(pieces: PieceSet): number {
+  let d = 1;
+  for (const p of pieces.pieces) if (p.weight.type === 'formula') d = Math.max(d, formulaDegree(p.weight.formula));
+  return d;
+}
 
 export type Mode = 'exact' | 'modular';
 
@@ -119,7 +128,7 @@ export class Meter {
         kind: 'mod',
         v: (map.get(side5) as Residues | undefined) ?? ring.zero,
         norm: (norms.get(side5) as SafeInt | undefined) ?? 0,
-        degree: unitTriangleCount(makeRegion(lengths)),
+        degree: unitTriangleCount(makeRegion(lengths)) * weightDegree(this.pieces),
       };
     }
     const map = this.polynomials(lengths, sides, useCache);

@@ -42,7 +42,7 @@ function claimText(c: ClaimSummary): string[] {
       `  permutations found for ${c.permutations.instances} instances: ${c.permutations.distinct === 1 ? `the first one found is the same for all: [${c.permutations.common!.join(',')}]` : `the first one found takes ${c.permutations.distinct} values (an instance may have several; the class lines above list those serving a whole class)`}`,
     );
   }
-  if (c.permutationRule === null) lines.push('  rule: no single block reversal or shift with affine endpoints serves every class');
+  if (c.permutationRule === null) lines.push('  rule: none found that serves every swept class among single block reversals and shifts whose endpoints are affine in the family variables (coefficients −1..2, constants −2..3)');
   else if (c.permutationRule) lines.push(`  rule: ${c.permutationRule.text}; as a relation: "relation": ${JSON.stringify(c.permutationRule.relation)}`);
   if (c.counterexamples) lines.push(`  ${c.counterexamples} counterexample${c.counterexamples === 1 ? '' : 's'} stored`);
   if (c.outcome === 'empty') lines.push('  the family has no instance within its bounds: nothing was checked, so nothing is shown to hold');

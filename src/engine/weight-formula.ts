@@ -154,6 +154,25 @@ export function formulaUses(node: FormulaNode): { letters: Set<StripLetter>; par
   return { letters, parameters, divides };
 }
 
+/** Total degree of a quotient-free formula in its strips and parameters: bounds a piece's weight degree. */
+export function formulaDegree(node: FormulaNode): number {
+  switch (node.kind) {
+    case 'integer':
+      return 0;
+    case 'parameter':
+    case 'strip':
+      return 1;
+    case 'negate':
+      return formulaDegree(node.operand);
+    case 'power':
+      return formulaDegree(node.base) * Math.max(node.exponent, 0);
+    case 'product':
+      return formulaDegree(node.left) + formulaDegree(node.right);
+    default:
+      return Math.max(formulaDegree(node.left), formulaDegree(node.right));
+  }
+}
+
 /** The operations a formula needs from a value ring. */
 export interface FormulaRing<T> {
   readonly one: T;

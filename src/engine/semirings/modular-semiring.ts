@@ -39,6 +39,13 @@ function generator(seed: number): () => number {
   };
 }
 
+// FNV-1a over the name's UTF-16 code units: a fixed 32-bit tag per variable name.
+function nameHash(name: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < name.length; i++) h = Math.imul(h ^ name.charCodeAt(i), 0x01000193) >>> 0;
+  return h;
+}
+
 export interface ModularSemiring extends Semiring<Residues> {
   readonly primes: readonly number[];
   readonly seed: number;
@@ -49,18 +56,18 @@ export interface ModularSemiring extends Semiring<Residues> {
  * Equal residues mean equal polynomials except with the probability `modularErrorBound` gives.
  */
 export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PRIMES, substitution?: (m: number) => number): ModularSemiring {
-  const random = generator(seed);
+  // Each variable's coordinates depend on the seed and its name only, never on the order in which a count
+  // first touches variables: two semirings of one seed (say with and without a substitution) share the point.
   const points = new Map<string, Residues>();
   const point = (name: string): Residues => {
     let r = points.get(name);
     if (!r) {
+      const random = generator(seed ^ nameHash(name));
       r = primes.map((p) => Math.floor(random() * p));
       points.set(name, r);
     }
     return r;
   };
-  // Draw the y's first, in order, so the point does not depend on which variables a count touches.
-  for (let m = 1; m <= 256; m++) point(`y${m}`);
   const m = primes.length;
   const of = (f: (p: number, k: number) => number): Residues => primes.map(f);
   const zero = of(() => 0);

@@ -26,6 +26,18 @@ describe('modularSemiring', () => {
     expect(a.isZero(a.add(a.position(1, 2), a.position(2, 1)))).toBe(true);
   });
 
+  it('gives each variable a point that does not depend on the order variables are first touched', () => {
+    const a = modularSemiring(5);
+    const b = modularSemiring(5);
+    const aFirst = [a.variable('q'), a.strip!('t', 3), a.position(1, 2)];
+    const bFirst = [b.position(1, 2), b.strip!('t', 3), b.variable('q')].reverse();
+    expect(aFirst).toEqual(bFirst);
+    // A substituted semiring touching t_2 first still gives t_1 ↦ t_2 the plain semiring's value of t_2.
+    const swap = (m: number) => (m === 1 ? 2 : m === 2 ? 1 : m);
+    const substituted = modularSemiring(5, DEFAULT_PRIMES, swap);
+    expect(substituted.strip!('t', 1)).toEqual(a.strip!('t', 2));
+  });
+
   it('applies a substitution y_m ↦ y_σ(m) at the same point', () => {
     const swap = (m: number) => (m === 1 ? 2 : m === 2 ? 1 : m);
     const plain = modularSemiring(3);

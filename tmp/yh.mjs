@@ -1,2 +1,0 @@
-import yargs from 'yargs';
-import { hideBin } from 'yargs/helpers';
