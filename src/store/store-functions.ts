@@ -1,4 +1,5 @@
-import { claimFingerprint, type Claim } from '../claims/index.js';
+import { claimFingerprint } from '../claims/claim-fingerprint.js';
+import type { Claim } from '../claims/claim-schema.js';
 import type { Store } from './open-store.js';
 
 /**

@@ -18,7 +18,7 @@ import {
 } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { openExistingStore } from '../open-existing-store.js';
-import { summaryJson } from '../sweep-summary-text.js';
+import { summaryJson } from '../summary-json.js';
 
 interface StatusArgs {
   claim?: string;
