@@ -83,7 +83,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   if (rangeOverride) {
     for (const name of Object.keys(rangeOverride)) {
       if (!variables.some((v) => v.name === name)) {
-        throw new AppError('invalid_argument', `Variable bound: expected one of ${variables.map((v) => `'${v.name}'`).join(' | ') || 'no variables'}, received '${name}'`, { path: '--max' });
+        throw new AppError('invalid_argument', `Variable bound: expected one of ${variables.map((v) => `'${v.name}'`).join(' | ') || 'no variables'}, received '${name}'`, { path: 'max' });
       }
     }
   }

@@ -164,7 +164,7 @@ export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
     return l;
   };
   const outOfRange = (cls: SizeClass, index: bigint) =>
-    new AppError('invalid_argument', `Instance index: expected 0 ≤ index < ${layout(cls).count} in class ${cls.key}, received ${index}`, { path: '--instance' });
+    new AppError('invalid_argument', `Instance index: expected 0 ≤ index < ${layout(cls).count} in class ${cls.key}, received ${index}`, { path: 'instance' });
 
   const { relationVariables } = program;
   return {
@@ -270,13 +270,13 @@ export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
       }
       const names = compiled.variables.map((v) => v.name);
       if (Object.keys(values).join(',') !== names.join(',') || Object.values(values).some((v) => !Number.isInteger(v))) {
-        throw new AppError('invalid_argument', `Class key: expected values of ${names.join(', ') || 'no variables'} such as '${classKey(Object.fromEntries(names.map((n) => [n, 1])))}', received '${key}'`, { path: '--instance' });
+        throw new AppError('invalid_argument', `Class key: expected values of ${names.join(', ') || 'no variables'} such as '${classKey(Object.fromEntries(names.map((n) => [n, 1])))}', received '${key}'`, { path: 'instance' });
       }
       const cls = sizeClassFor(compiled, values);
       try {
         makeRegion(cls.lengths);
       } catch (e) {
-        throw toAppError(e, '--instance');
+        throw toAppError(e, 'instance');
       }
       return cls;
     },

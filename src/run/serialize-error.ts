@@ -1,3 +1,4 @@
+import { EngineError } from '../engine/index.js';
 import { AppError, type ErrorCode } from '../errors.js';
 import type { SerializedError } from './worker-task.js';
 
@@ -11,6 +12,8 @@ export function serializeError(e: unknown): SerializedError {
       stack: e.stack,
       path: typeof coded.path === 'string' ? coded.path : undefined,
       hint: typeof coded.hint === 'string' ? coded.hint : undefined,
+      // Our own coded errors already read "<What>: expected X, received Y"; anything else gets that frame.
+      coded: e instanceof AppError || e instanceof EngineError,
     };
   }
   return { code: 'internal_error', message: String(e) };
@@ -19,7 +22,7 @@ export function serializeError(e: unknown): SerializedError {
 /** Rebuilds a coded error on the main thread; the worker's stack is kept as the cause. */
 export function deserializeError(s: SerializedError, where: string): AppError {
   const cause = Object.assign(new Error(s.message), { stack: s.stack });
-  const known = s.code !== 'internal_error' && /: expected .*, received /.test(s.message);
+  const known = s.code !== 'internal_error' && s.coded === true;
   const message = known ? s.message : `Worker (${where}): expected no error, received ${s.message}`;
   return new AppError(s.code as ErrorCode, message, { cause, ...(s.path ? { path: s.path } : {}), ...(s.hint ? { hint: s.hint } : {}) });
 }

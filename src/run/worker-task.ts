@@ -45,6 +45,8 @@ export interface SerializedError {
   readonly stack?: string | undefined;
   readonly path?: string | undefined;
   readonly hint?: string | undefined;
+  /** Thrown as one of our coded errors (AppError, EngineError), so its message is already in our grammar. */
+  readonly coded?: boolean | undefined;
 }
 
 export type WorkerReply =

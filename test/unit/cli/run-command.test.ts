@@ -34,6 +34,20 @@ describe('runCommand (the CLI edge)', () => {
     expect(err.join('')).toContain('✖ --workers: expected a positive integer, received 0\n  → at --workers');
   });
 
+  it('names the flag of a field the claims layer reports (max, instance); a claim file\'s own paths stay', async () => {
+    const { out } = capture();
+    await runCommand(true, () => {
+      throw new AppError('invalid_argument', "Variable bound: expected one of 'n', received 'm'", { path: 'max' });
+    });
+    await runCommand(true, () => {
+      throw new AppError('invalid_claim', 'Theory: expected a built-in theory', { path: 'max', file: 'c.json' });
+    });
+    vi.restoreAllMocks();
+    const [first, second] = out.join('').trim().split('\n').map((l) => JSON.parse(l) as { error: { path: string } });
+    expect(first!.error.path).toBe('--max');
+    expect(second!.error.path).toBe('max');
+  });
+
   it('reports anything else as an internal error with exit 3', async () => {
     const { err } = capture();
     await runCommand(false, async () => {
