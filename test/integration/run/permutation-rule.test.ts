@@ -1,6 +1,7 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
 import { naiveCount } from '../../../src/reference/naive-count.js';
 import { toTerms } from '../../../src/reference/ref-polynomial.js';
@@ -40,7 +41,13 @@ describe('rule inference (issue 7)', () => {
   it('exchanging sides 1 and 4 of (a,0,b,a,0,b) in equivariant cohomology: one affine block reversal for every class a, b ≤ 4', async () => {
     const file = join(dir, 'claim.json');
     writeFileSync(file, JSON.stringify(claim));
-    const s = await runSweep({ claims: [loadSweepClaim(file)], options: parseRunOptions({ db: join(dir, 'rule.sqlite'), workers: 2 }) });
+    const db = join(dir, 'rule.sqlite');
+    const s = await runSweep({ claims: [loadSweepClaim(file)], options: parseRunOptions({ db, workers: 2 }) });
+    // Per-instance permutations are kept only on request (run --keep-permutations); class-wide ones always.
+    const store = new Database(db, { readonly: true });
+    expect((store.prepare('SELECT COUNT(*) AS n FROM permutations').get() as { n: number }).n).toBe(0);
+    expect((store.prepare('SELECT COUNT(*) AS n FROM chunks WHERE common_permutations IS NOT NULL').get() as { n: number }).n).toBeGreaterThan(0);
+    store.close();
     const rule = s.claims[0]!.permutationRule!;
     expect(s.claims[0]!.classes).toHaveLength(16);
     expect(rule.relation).toEqual({ type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 'b+1', to: 'a+b' }] });
