@@ -31,7 +31,7 @@ function timed(cmd: string[], limit: number): Run {
 
 const reverse = (s: string) => [...s].reverse().join('');
 const s = (x: number) => (x >= 10 ? x.toFixed(1) : x.toFixed(2));
-const ratio = (py: Run, node: Run, key: 'wall' | 'cpu') => (py.stopped ? `> ${(py[key] / Math.max(node[key], 0.01)).toFixed(0)}×` : `${(py[key] / Math.max(node[key], 0.01)).toFixed(1)}×`);
+const ratio = (py: Run, node: Run, key: 'wall' | 'cpu') => (py.stopped ? `> ${(py[key] / Math.max(node[key], 0.01)).toFixed(1)}×` : `${(py[key] / Math.max(node[key], 0.01)).toFixed(1)}×`);
 const pyText = (r: Run, key: 'wall' | 'cpu') => (r.stopped ? `stopped at ${s(r[key])}` : s(r[key]));
 
 const countNode = (theory: string, l: string, m: string, n: string, limit = 600) => timed(['node', cli, 'count', '--theory', theory, '--triangle', `${l},${m},${n}`, '--form', 'expanded', '--json'], limit);

@@ -36,5 +36,6 @@ const stored = existsSync(out) && only.length > 0 ? readFileSync(out, 'utf8').sp
 const fresh = new Map(sections.map((x) => [heading(x), x]));
 const merged = stored.map((x) => fresh.get(heading(x)) ?? x);
 for (const x of sections) if (!stored.some((y) => heading(y) === heading(x))) merged.push(x);
-writeFileSync(out, `${header}\n${merged.join('\n\n')}\n`);
+const partial = stored.length > 0 ? `Partial run: ${sections.map(heading).map((h) => `"${h.slice(3)}"`).join(', ')} measured on that date; the other sections are kept from earlier runs.\n\n` : '';
+writeFileSync(out, `${header}\n${partial}${merged.join('\n\n')}\n`);
 process.stderr.write(`wrote ${out}\n`);
