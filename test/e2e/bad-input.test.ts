@@ -17,6 +17,8 @@ const CASES: { name: string; args: string[]; code: string; at: string }[] = [
   { name: 'a file that is not JSON', args: ['test/fixtures/claims/invalid/not-json.json'], code: 'invalid_json', at: 'not-json.json' },
   { name: 'a missing claim file', args: [join(dir, 'no-such-claim.json')], code: 'file_not_found', at: 'no-such-claim.json' },
   { name: 'a malformed --max', args: ['conjectures/k-theory-rotation-to-dual.json', '--max', 'n:5'], code: 'invalid_argument', at: '--max' },
+  // yargs alone would sum the two values and sweep with 3 workers.
+  { name: 'a one-value flag given twice', args: ['--workers', '2', '--workers', '1'], code: 'invalid_argument', at: '--workers' },
 ];
 
 describe('malformed input: coded message, exit 2, store untouched', () => {
