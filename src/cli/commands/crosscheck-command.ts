@@ -6,6 +6,7 @@ import { crosscheck, type CrosscheckSummary } from '../../run/crosscheck.js';
 import type { ReferenceTheory } from '../../reference/crosscheck-tables.js';
 import type { LocalizationTheory } from '../../run/localization-values.js';
 import { runCommand } from '../run-command.js';
+import { JSON_FORMAT_VERSION } from '../../report/value-json.js';
 
 const THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant', 'equivariant-k-theory', 'ssm', 'ssm-chern'] as const;
 
@@ -57,7 +58,7 @@ export const crosscheckCommand: CommandModule<object, CrosscheckArgs> = {
         },
       });
       bar?.stop();
-      if (args.json) process.stdout.write(`${JSON.stringify({ ...summary, firstDisagreement: summary.firstDisagreement ?? null })}\n`);
+      if (args.json) process.stdout.write(`${JSON.stringify({ formatVersion: JSON_FORMAT_VERSION, ...summary, firstDisagreement: summary.firstDisagreement ?? null })}\n`);
       else process.stdout.write(`${summaryText(summary)}\n`);
       return summary.agreements === summary.triples ? 0 : 1;
     }),

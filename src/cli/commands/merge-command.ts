@@ -3,6 +3,7 @@ import { INCOMPLETE_MERGE_EXIT, mergeStoreFiles } from '../../run/merge-store-fi
 import type { ClaimMergeReport, MergeReport } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { summaryJson } from '../sweep-summary-text.js';
+import { JSON_FORMAT_VERSION } from '../../report/value-json.js';
 
 interface MergeArgs {
   stores: string[];
@@ -45,7 +46,7 @@ export const mergeCommand: CommandModule<object, MergeArgs> = {
   handler: (args) =>
     runCommand(args.json, () => {
       const report = mergeStoreFiles(args.stores, args.into);
-      process.stdout.write(`${args.json ? summaryJson(report) : mergeText(report, args.into)}\n`);
+      process.stdout.write(`${args.json ? summaryJson({ formatVersion: JSON_FORMAT_VERSION, ...report }) : mergeText(report, args.into)}\n`);
       return report.complete ? 0 : INCOMPLETE_MERGE_EXIT;
     }),
 };

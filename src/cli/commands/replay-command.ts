@@ -15,6 +15,7 @@ import { openExistingStore, storedClaims } from '../stored-claims.js';
 import { summaryJson } from '../sweep-summary-text.js';
 import { VALUE_FORMS, type ValueForm } from '../../report/root-form.js';
 import { valueInForm } from '../value-in-form.js';
+import { JSON_FORMAT_VERSION } from '../../report/value-json.js';
 
 interface ReplayArgs {
   claim: string;
@@ -117,7 +118,7 @@ export const replayCommand: CommandModule<object, ReplayArgs> = {
       const instance = findInstance(plan, args);
       const r = createEvaluator(claim, { exact: true }).confirm(instance);
       if (args.json) {
-        process.stdout.write(`${summaryJson({ claimId: id, instance: `${instance.classKey}:${instance.index}`, ...r })}\n`);
+        process.stdout.write(`${summaryJson({ formatVersion: JSON_FORMAT_VERSION, claimId: id, instance: `${instance.classKey}:${instance.index}`, ...r })}\n`);
         return r.status === 'fails' ? 1 : 0;
       }
       const lines = [

@@ -7,6 +7,7 @@ import { DEFAULT_STORE_PATH } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { sweepProgressBar } from '../sweep-progress-bar.js';
 import { summaryJson, sweepSummaryText } from '../sweep-summary-text.js';
+import { JSON_FORMAT_VERSION } from '../../report/value-json.js';
 
 interface RunArgs {
   claims: string[];
@@ -84,7 +85,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
       try {
         const summary = await runSweep({ claims, options, signal: interrupt.signal, onProgress: bar.onProgress });
         bar.stop();
-        process.stdout.write(`${options.json ? summaryJson(summary) : sweepSummaryText(summary)}\n`);
+        process.stdout.write(`${options.json ? summaryJson({ formatVersion: JSON_FORMAT_VERSION, ...summary }) : sweepSummaryText(summary)}\n`);
         return summary.exitCode;
       } finally {
         bar.stop();
