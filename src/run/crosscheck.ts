@@ -104,45 +104,45 @@ export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
     return crosscheckFractions(theory, options.pieces, options, started);
   }
   const pieces = options.pieces ?? theoryPieceSet(theory);
-  const grassmannians: [number, number, string[]][] = [];
-  for (let n = 1; n <= options.maxN; n++) for (let k = 0; k <= n; k++) grassmannians.push([n, k, grassmannianStrings(k, n)]);
-  const total = grassmannians.reduce((s, [, , strings]) => s + strings.length ** 2, 0);
-  let done = 0;
-  let firstDisagreement: Disagreement | undefined;
-  const rows: CrosscheckRow[] = [];
-  for (const [n, k, strings] of grassmannians) {
+  return compareTriples(theory, options, started, (k, n) => {
     const reference = referenceTable(theory, k, n);
-    let triples = 0;
-    let agreements = 0;
-    for (const lambda of strings) {
-      for (const mu of strings) {
-        const engine = engineProducts(theory, pieces, lambda, mu);
-        for (const nu of strings) {
-          triples++;
-          const e = canonical(engine.get(nu) ?? []);
-          const r = canonical(reference.get(`${lambda},${mu},${nu}`)?.terms ?? []);
-          if (e === r) agreements++;
-          else firstDisagreement ??= { lambda, mu, nu, engine: e, reference: r };
-        }
-        options.onProgress?.(++done, total);
-      }
-    }
-    rows.push({ n, k, triples, agreements });
-  }
-  return {
-    theory: options.theory,
-    maxN: options.maxN,
-    rows,
-    triples: rows.reduce((s, r) => s + r.triples, 0),
-    agreements: rows.reduce((s, r) => s + r.agreements, 0),
-    firstDisagreement,
-    seconds: (performance.now() - started) / 1000,
-  };
+    return (lambda, mu) => {
+      const engine = engineProducts(theory, pieces, lambda, mu);
+      return (nu) => {
+        const e = canonical(engine.get(nu) ?? []);
+        const r = canonical(reference.get(`${lambda},${mu},${nu}`)?.terms ?? []);
+        return e === r ? undefined : { engine: e, reference: r };
+      };
+    };
+  });
 }
 
 function crosscheckFractions(theory: LocalizationTheory, pieces: PieceSet, options: CrosscheckOptions, started: number): CrosscheckSummary {
   const letter = localizationLetter(theory);
   const names = (k: number) => `${letter}${k + 1}`;
+  return compareTriples(theory, options, started, (k, n) => {
+    const reference = localizationValues(theory, k, n);
+    return (lambda, mu) => {
+      const engine = fractionProducts(pieces, lambda, mu);
+      return (nu) => {
+        const e = engine.get(nu) ?? fractionOf(new Map());
+        const r = reference.get(`${lambda},${mu},${nu}`) ?? fractionOf(new Map());
+        return fractionEquals(e, r) ? undefined : { engine: fractionText(e, names), reference: fractionText(r, names) };
+      };
+    };
+  });
+}
+
+// What one triple's comparison says: nothing when engine and reference agree, both texts otherwise.
+type TripleCheck = (nu: string) => { engine: string; reference: string } | undefined;
+
+// Every triple of every Gr(k, n) with n ≤ maxN, one engine sweep per (λ, μ), tallied per Grassmannian.
+function compareTriples(
+  theory: CrosscheckSummary['theory'],
+  options: CrosscheckOptions,
+  started: number,
+  grassmannian: (k: number, n: number) => (lambda: string, mu: string) => TripleCheck,
+): CrosscheckSummary {
   const grassmannians: [number, number, string[]][] = [];
   for (let n = 1; n <= options.maxN; n++) for (let k = 0; k <= n; k++) grassmannians.push([n, k, grassmannianStrings(k, n)]);
   const total = grassmannians.reduce((s, [, , strings]) => s + strings.length ** 2, 0);
@@ -150,18 +150,17 @@ function crosscheckFractions(theory: LocalizationTheory, pieces: PieceSet, optio
   let firstDisagreement: Disagreement | undefined;
   const rows: CrosscheckRow[] = [];
   for (const [n, k, strings] of grassmannians) {
-    const reference = localizationValues(theory, k, n);
+    const product = grassmannian(k, n);
     let triples = 0;
     let agreements = 0;
     for (const lambda of strings) {
       for (const mu of strings) {
-        const engine = fractionProducts(pieces, lambda, mu);
+        const check = product(lambda, mu);
         for (const nu of strings) {
           triples++;
-          const e = engine.get(nu) ?? fractionOf(new Map());
-          const r = reference.get(`${lambda},${mu},${nu}`) ?? fractionOf(new Map());
-          if (fractionEquals(e, r)) agreements++;
-          else firstDisagreement ??= { lambda, mu, nu, engine: fractionText(e, names), reference: fractionText(r, names) };
+          const d = check(nu);
+          if (!d) agreements++;
+          else firstDisagreement ??= { lambda, mu, nu, ...d };
         }
         options.onProgress?.(++done, total);
       }
