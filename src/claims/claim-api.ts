@@ -82,7 +82,23 @@ export interface ClaimPlan {
   instancesFrom?(cls: SizeClass, start: bigint, end: bigint): Iterable<Instance>;
 }
 
+/** Tallies a bulk scan adds to (the runner's chunk counters, counted as the per-instance path counts them). */
+export interface ScanTally {
+  checked: number;
+  holds: number;
+  skippedZero: number;
+  paired: number;
+  vacuous: number;
+  nonzero: number;
+}
+
 export interface Evaluator {
+  /**
+   * Optional bulk path: decides instances [start, end) of a class from value tables, adding to `tally`,
+   * and hands every instance it does not decide (failures among them) to `fallback`, in index order.
+   * False when it does not scan this class (nothing tallied).
+   */
+  scan?(cls: SizeClass, start: bigint, end: bigint, tally: ScanTally, fallback: (index: bigint) => void): boolean;
   /** Checks one instance; may use a cache of one-pass-for-all-completions sweeps keyed by partial boundary. */
   evaluate(instance: Instance): InstanceResult;
   /** Recomputes one instance with exact arithmetic only (used to confirm every counterexample). */

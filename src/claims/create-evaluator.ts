@@ -9,6 +9,7 @@ import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measure
 import { sizeOf } from './compile-claim.js';
 import { Meter, type Mode, type Value } from './measure.js';
 import { permutationText } from './permutation-text.js';
+import { familyScanner } from './family-scan.js';
 import { FORMULA_THEORY, FormulaMeter } from './formula/formula-meter.js';
 import { planClaim } from './plan-claim.js';
 import { isIdentity, isInvolution, type Permutation } from './substitution.js';
@@ -19,6 +20,8 @@ export interface EvaluatorTuning {
   readonly cacheSize?: number;
   /** Check each unordered pair {b, T(b)} once when the transform is an involution (default true). */
   readonly pairing?: boolean;
+  /** Decide whole chunks from class value tables where the claim allows it (default true; `scan`). */
+  readonly bulk?: boolean;
 }
 
 function unmeasured(theory: string, lengths: readonly number[], sides: readonly string[], why: string): Measured {
@@ -177,9 +180,11 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     };
   };
 
+  const scanner = (tuning.bulk ?? true) ? familyScanner({ program, plan, involutive, sameTheory }) : undefined;
   return {
     evaluate: (instance) => run(instance, options.exact, false),
     confirm: (instance) => run(instance, true, true),
+    ...(scanner ? { scan: scanner.scan } : {}),
   };
 }
 

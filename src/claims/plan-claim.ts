@@ -8,14 +8,14 @@ import type { CompiledClaim } from './compile-claim.js';
 import { contentVectors, multinomial, nextString, rankString, unrankString } from './multiset-rank.js';
 
 /** One group of sides sharing a content vector; `sides` in radix order (side 5 last, least significant). */
-interface Content {
+export interface Content {
   readonly counts: readonly number[];
   readonly strings: bigint;
   readonly offset: bigint;
   readonly size: bigint;
 }
 
-interface Group {
+export interface Group {
   readonly sides: readonly number[];
   readonly contents: readonly Content[];
   readonly size: bigint;
@@ -23,7 +23,7 @@ interface Group {
   readonly byContent: ReadonlyMap<number, Content>;
 }
 
-interface Layout {
+export interface Layout {
   readonly cls: SizeClass;
   /** Most significant first; the group holding side 5 comes last. */
   readonly groups: readonly Group[];
@@ -38,6 +38,8 @@ export interface ClaimPlanExt extends ClaimPlan {
   compareIndex(cls: SizeClass, a: readonly string[], b: readonly string[]): number | undefined;
   /** The class of given variable values (whatever the bounds), e.g. to resolve an `Instance.classKey`. */
   classForKey(key: string): SizeClass;
+  /** How a class's index is built: groups of sides sharing a content, most significant first. */
+  layoutOf(cls: SizeClass): Layout;
 }
 
 const NO_VARIABLES = 'all';
@@ -186,6 +188,7 @@ export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
       return out.sort(compareClasses);
     },
     instanceCount: (cls) => layout(cls).count,
+    layoutOf: layout,
     instanceAt(cls, index) {
       const l = layout(cls);
       if (index < 0n || index >= l.count) throw outOfRange(cls, index);

@@ -58,8 +58,7 @@ export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeCl
     const c = evaluator.confirm(instance);
     return c.status === 'fails' ? c : undefined;
   };
-  const instances: Iterable<Instance> = plan.instancesFrom ? plan.instancesFrom(cls, start, end) : unranked(plan, cls, start, end);
-  for (const instance of instances) {
+  const one = (instance: Instance) => {
     const r = evaluator.evaluate(instance);
     out.checked++;
     if (r.method === 'modular') {
@@ -68,7 +67,7 @@ export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeCl
     }
     if (r.status === 'paired') {
       out.paired++;
-      continue;
+      return;
     }
     // Only an exact recomputation may turn a "fails" into a stored counterexample.
     decide(r.status, r.vacuous, () => confirmed(instance));
@@ -83,6 +82,12 @@ export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeCl
         truncated ||= r.permutationsTruncated === true;
       }
     }
+  };
+  // The bulk path decides what holds from class value tables; each instance it leaves (failures) is evaluated one by one.
+  const scanned = evaluator.scan?.(cls, start, end, out, (index) => one(plan.instanceAt(cls, index))) ?? false;
+  if (!scanned) {
+    const instances: Iterable<Instance> = plan.instancesFrom ? plan.instancesFrom(cls, start, end) : unranked(plan, cls, start, end);
+    for (const instance of instances) one(instance);
   }
   const commonPermutations = common ? [...common.values()] : undefined;
   return { ...out, durationMs: performance.now() - began, counterexamples, permutations, commonPermutations, permutationsTruncated: truncated };

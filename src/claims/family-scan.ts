@@ -1,0 +1,325 @@
+import { countFamily, FAMILY_SIDE_ORDER, fillingCountSemiring, integerSemiring, makeRegion, type SafeInt, type Semiring } from '../engine/index.js';
+import type { ScanTally, SizeClass } from './claim-api.js';
+import type { ClaimProgram } from './compile-claim-program.js';
+import { rankString, unrankString } from './multiset-rank.js';
+import type { ClaimPlanExt, Layout } from './plan-claim.js';
+import { applySideMap } from './side-map.js';
+
+/** The bulk path of a sweep: integer values of a whole class from value tables, compared by index arithmetic. */
+export interface FamilyScanner {
+  /**
+   * Decides instances [start, end) of `cls` from value tables, adding to `tally`; every instance it does
+   * not decide (a comparison that fails, a cell it cannot tabulate) goes to `fallback`, in index order.
+   * False when the class is not scanned at all (then nothing was tallied).
+   */
+  scan(cls: SizeClass, start: bigint, end: bigint, tally: ScanTally, fallback: (index: bigint) => void): boolean;
+}
+
+/** What the evaluator decided about pairing; the scan must answer exactly as the per-instance path. */
+export interface ScanSetup {
+  readonly program: ClaimProgram;
+  readonly plan: ClaimPlanExt;
+  /** {b, T(b)} checked once (the evaluator's own rule: involutive transform, same theory, symmetric relation). */
+  readonly involutive: boolean;
+  readonly sameTheory: boolean;
+}
+
+// One content combination of a class (a content per group): a product family with one candidate list per side.
+interface Cell {
+  readonly ok: boolean;
+  readonly left: Float64Array;
+  readonly leftStride: Float64Array;
+  readonly right: Float64Array;
+  /** Per side j of T(b): stride of its digit in `right`. */
+  readonly rightStride: Float64Array;
+  /** Per side j of T(b): source digit (of side `from_j` of b) → digit in `right`, or null for the same digit. */
+  readonly rankMap: (Int32Array | null)[];
+  /** T(b) is an instance of the class: its index is partnerBase + Σ partnerCoef[j] · digit_j. */
+  readonly inClass: boolean;
+  readonly partnerBase: number;
+  readonly partnerCoef: Float64Array;
+  readonly entries: number;
+}
+
+const NOT_TABULATED: Cell = { ok: false, left: new Float64Array(0), leftStride: new Float64Array(6), right: new Float64Array(0), rightStride: new Float64Array(6), rankMap: [], inClass: false, partnerBase: 0, partnerCoef: new Float64Array(6), entries: 0 };
+
+// Table entries kept per worker (8 bytes each): the 6×6 parallelogram family needs 0.85 M per theory.
+const CACHE_ENTRIES = 6_000_000;
+// A cell larger than this is left to the per-instance path.
+const MAX_CELL = 1 << 24;
+
+/** The bulk scanner of a claim, or undefined when its values are not integers compared for equality through a side map. */
+export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
+  const { program, plan, involutive, sameTheory } = setup;
+  const measure = program.claim.compare.measure.type;
+  const integer = measure === 'puzzles' || (measure === 'value' && !program.polynomial);
+  const alphabet = program.left.boundaryLabels;
+  const sideMap = program.sideMap;
+  if (!integer || program.formula || !sideMap || program.claim.compare.relation.type !== 'equal' || program.relation.substitution || program.relation.searchSpace) return undefined;
+  if (!alphabet.every((a) => a.length === 1)) return undefined;
+  const semiring: Semiring<SafeInt> = measure === 'puzzles' ? fillingCountSemiring : integerSemiring;
+  const nonzeroOnly = program.claim.family.nonzeroOnly;
+  // Cells and their left tables, dropped together when the tables outgrow the budget.
+  const cells = new Map<string, Cell>();
+  const lefts = new Map<string, { values: Float64Array; stride: Float64Array } | undefined>();
+  let cached = 0;
+  const remember = (entries: number) => {
+    cached += entries;
+    if (cached > CACHE_ENTRIES) {
+      cells.clear();
+      lefts.clear();
+      cached = entries;
+    }
+  };
+
+  const scan: FamilyScanner['scan'] = (cls, start, end, tally, fallback) => {
+    const layout = plan.layoutOf(cls);
+    if (layout.count > BigInt(Number.MAX_SAFE_INTEGER)) return false;
+    // A group of one side reads its whole digit (content offset + rank) from one candidate list of every
+    // content; only groups of several sides split the class into cells, one per content.
+    const groups = layout.groups.map((g) => ({
+      sides: g.sides,
+      single: g.sides.length === 1,
+      size: Number(g.size),
+      offsets: [...g.contents.map((c) => Number(c.offset)), Number(g.size)],
+      strings: g.contents.map((c) => Number(c.strings)),
+    }));
+    const leftOf = (contents: readonly number[]) => {
+      const key = `${cls.key}|${contents.join(',')}`;
+      if (!lefts.has(key)) {
+        const t = leftTable(cls, layout, contents);
+        remember(t?.values.length ?? 0);
+        lefts.set(key, t);
+      }
+      return lefts.get(key);
+    };
+    const cellOf = (contents: readonly number[]): Cell => {
+      const key = `${cls.key}|${contents.join(',')}`;
+      let cell = cells.get(key);
+      if (!cell) {
+        cell = buildCell(cls, layout, contents, leftOf);
+        remember(cell.entries);
+        cells.set(key, cell);
+      }
+      return cell;
+    };
+    const digit = new Float64Array(6);
+    const contents = new Array<number>(groups.length).fill(0);
+    let cellKey = -1;
+    let cell = NOT_TABULATED;
+    const from = sideMap.map((s) => s.from);
+    for (let i = Number(start), e = Number(end); i < e; i++) {
+      // Unrank i: mixed radix over groups (least significant last), then ranks within the group's content.
+      let rest = i;
+      let key = 0;
+      for (let g = groups.length - 1; g >= 0; g--) {
+        const G = groups[g]!;
+        let r = rest % G.size;
+        rest = (rest - r) / G.size;
+        if (G.single) {
+          digit[G.sides[0]!] = r;
+          contents[g] = 0;
+          key *= G.strings.length;
+          continue;
+        }
+        let c = 0;
+        while (r >= G.offsets[c + 1]!) c++;
+        r -= G.offsets[c]!;
+        contents[g] = c;
+        key = key * G.strings.length + c;
+        const n = G.strings[c]!;
+        for (let k = G.sides.length - 1; k >= 0; k--) {
+          const q = r % n;
+          digit[G.sides[k]!] = q;
+          r = (r - q) / n;
+        }
+      }
+      if (key !== cellKey) {
+        cell = cellOf(contents);
+        cellKey = key;
+      }
+      if (!cell.ok) {
+        fallback(BigInt(i));
+        continue;
+      }
+      let at = 0;
+      let partner = cell.partnerBase;
+      for (let j = 0; j < 6; j++) {
+        const d = digit[from[j]!]!;
+        const map = cell.rankMap[j];
+        const t = map ? map[d]! : d;
+        at += cell.rightStride[j]! * t;
+        partner += cell.partnerCoef[j]! * t;
+      }
+      let pairable = false;
+      if (involutive && cell.inClass) {
+        if (partner < i) {
+          tally.checked++;
+          tally.paired++;
+          continue;
+        }
+        pairable = partner > i;
+      }
+      let own = 0;
+      for (let k = 0; k < 6; k++) own += cell.leftStride[k]! * digit[k]!;
+      const left = cell.left[own]!;
+      if (nonzeroOnly && left === 0 && !pairable) {
+        tally.checked++;
+        tally.skippedZero++;
+        continue;
+      }
+      const right = cell.right[at]!;
+      if (left !== right) {
+        // A failure (or a zero beside a nonzero partner): the per-instance path builds and confirms its rows.
+        fallback(BigInt(i));
+        continue;
+      }
+      const both = pairable ? 2 : 1;
+      tally.checked++;
+      if (nonzeroOnly && left === 0) tally.skippedZero += both;
+      else {
+        tally.holds += both;
+        if (left === 0) tally.vacuous += both;
+        else tally.nonzero += both;
+      }
+    }
+    return true;
+  };
+
+  // Whatever the tables cannot do (values past safe integers, a label the right theory lacks), the per-instance path does, with its own errors.
+  function guarded<T>(f: () => T | undefined): T | undefined {
+    try {
+      return f();
+    } catch {
+      return undefined;
+    }
+  }
+
+  function candidatesOf(layout: Layout, contents: readonly number[]): string[][] {
+    const candidates: string[][] = [[], [], [], [], [], []];
+    layout.groups.forEach((g, gi) => {
+      const list: string[] = [];
+      for (const content of g.sides.length === 1 ? g.contents : [g.contents[contents[gi]!]!]) {
+        for (let r = 0n; r < content.strings; r++) list.push(unrankString(r, content.counts).map((a) => alphabet[a]!).join(''));
+      }
+      for (const s of g.sides) candidates[s] = list;
+    });
+    return candidates;
+  }
+
+  function leftTable(cls: SizeClass, layout: Layout, contents: readonly number[]): { values: Float64Array; stride: Float64Array } | undefined {
+    return guarded(() => {
+      const candidates = candidatesOf(layout, contents);
+      if (candidates.reduce((p, l) => p * l.length, 1) > MAX_CELL) return undefined;
+      const values = countFamily(makeRegion(cls.lengths), candidates, program.left, { semiring }).numbers;
+      return values ? { values, stride: strides(candidates.map((l) => l.length)) } : undefined;
+    });
+  }
+
+  function buildCell(cls: SizeClass, layout: Layout, contents: readonly number[], leftOf: (c: readonly number[]) => { values: Float64Array; stride: Float64Array } | undefined): Cell {
+    const own = leftOf(contents);
+    if (!own) return NOT_TABULATED;
+    return guarded(() => tabulate(cls, layout, contents, own, leftOf)) ?? NOT_TABULATED;
+  }
+
+  function tabulate(
+    cls: SizeClass,
+    layout: Layout,
+    contents: readonly number[],
+    own: { values: Float64Array; stride: Float64Array },
+    leftOf: (c: readonly number[]) => { values: Float64Array; stride: Float64Array } | undefined,
+  ): Cell | undefined {
+    const candidates = candidatesOf(layout, contents);
+    const leftStride = own.stride;
+    // T(b) side j is side from_j of b, reversed and renamed: map each candidate once.
+    const images = sideMap!.map((s) => candidates[s.from]!.map((x) => applySideMap([{ ...s, from: 0 }], [cls.lengths[s.from]!], [x]).sides[0]!));
+    const lengths = sideMap!.map((s) => cls.lengths[s.from]!);
+    const target = targetCell(layout, lengths, cls.lengths, images);
+    const partnerCoef = new Float64Array(6);
+    let partnerBase = 0;
+    if (target) {
+      let weight = 1;
+      for (let g = layout.groups.length - 1; g >= 0; g--) {
+        const group = layout.groups[g]!;
+        if (group.sides.length === 1) {
+          // the digit of a one-side group already holds its content's offset
+          partnerCoef[group.sides[0]!] = weight;
+          weight *= Number(group.size);
+          continue;
+        }
+        const content = group.contents[target.contents[g]!]!;
+        partnerBase += Number(content.offset) * weight;
+        let w = weight;
+        for (let k = group.sides.length - 1; k >= 0; k--) {
+          partnerCoef[group.sides[k]!] = w;
+          w *= Number(content.strings);
+        }
+        weight *= Number(group.size);
+      }
+    }
+    if (target && sameTheory) {
+      // T(b) lies in this class: its values are a cell of the same left tables.
+      const other = leftOf(target.contents);
+      if (!other) return undefined;
+      return { ok: true, left: own.values, leftStride, right: other.values, rightStride: other.stride, rankMap: target.rankMap, inClass: true, partnerBase, partnerCoef, entries: 0 };
+    }
+    // Another theory or outside the class: a table of the images themselves, read by b's own digits (no pairing then).
+    const right = countFamily(makeRegion(lengths), images, program.right, { semiring }).numbers;
+    if (!right) return undefined;
+    const identity = [null, null, null, null, null, null];
+    return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length };
+  }
+
+  // The class cell T(b) falls in, with each side's source digit → rank there; undefined if T(b) is not in the class.
+  function targetCell(layout: Layout, lengths: readonly number[], classLengths: readonly number[], images: readonly string[][]): { contents: number[]; rankMap: (Int32Array | null)[] } | undefined {
+    if (lengths.some((l, i) => l !== classLengths[i])) return undefined;
+    const countsOf = (s: string) => {
+      const c = new Array<number>(alphabet.length).fill(0);
+      for (const ch of s) c[alphabet.indexOf(ch)]!++;
+      return c;
+    };
+    const contents: number[] = [];
+    const rankMap: (Int32Array | null)[] = [null, null, null, null, null, null];
+    for (const g of layout.groups) {
+      const contentOf = (s: string) => {
+        const counts = countsOf(s);
+        return g.contents.findIndex((c) => c.counts.every((x, a) => x === counts[a]));
+      };
+      let shared = -1;
+      for (const side of g.sides) {
+        const list = images[side]!;
+        const ranks = new Int32Array(list.length);
+        for (let d = 0; d < list.length; d++) {
+          const s = list[d]!;
+          const c = contentOf(s);
+          if (c < 0) return undefined;
+          const content = g.contents[c]!;
+          const rank = Number(rankString([...s].map((ch) => alphabet.indexOf(ch)), content.counts));
+          if (g.sides.length === 1) ranks[d] = Number(content.offset) + rank;
+          else {
+            // the sides of a group share one content (the cell's)
+            if (shared >= 0 && c !== shared) return undefined;
+            shared = c;
+            ranks[d] = rank;
+          }
+        }
+        rankMap[side] = ranks.every((r, d) => r === d) ? null : ranks;
+      }
+      contents.push(Math.max(shared, 0));
+    }
+    return { contents, rankMap };
+  }
+
+  return { scan };
+}
+
+// Strides of a family table's index (FAMILY_SIDE_ORDER: side 5 least significant), per side.
+function strides(counts: readonly number[]): Float64Array {
+  const out = new Float64Array(6);
+  let acc = 1;
+  for (const k of [...FAMILY_SIDE_ORDER].reverse()) {
+    out[k] = acc;
+    acc *= counts[k]!;
+  }
+  return out;
+}
