@@ -7,7 +7,7 @@ import { loadClaim as loadClaimFile, type Claim } from './claims/index.js';
 import { countRegion } from './claims/count-region.js';
 import { resolveTheory } from './claims/resolve-theory.js';
 import { enumeratePuzzles as enumerateEngine, structureConstantSides, type PieceSet, type Puzzle } from './engine/index.js';
-import { AppError } from './errors.js';
+import { CodedError } from './errors/index.js';
 import { expandProduct } from './products/expand-product.js';
 import { structureTable } from './products/parallel-table.js';
 import { parsePartition, partitionOfString, partitionText, stringOfPartition, type Grassmannian } from './products/partition-strings.js';
@@ -21,7 +21,7 @@ import { runSweep } from './run/run-sweep.js';
 import type { SweepSummary } from './run/sweep-summary.js';
 import { regionOfSides } from './claims/count-region.js';
 
-export { AppError, JSON_FORMAT_VERSION, partitionOfString, partitionText, parsePartition, stringOfPartition };
+export { CodedError, JSON_FORMAT_VERSION, partitionOfString, partitionText, parsePartition, stringOfPartition };
 export type { Claim, Grassmannian, PieceSet, Puzzle, SweepSummary, ValueForm };
 export type { CountJson, JsonInteger, PartitionsJson, ProductJson, TableJson, TermJson, ValueJson } from './products/json-types.js';
 
@@ -43,7 +43,7 @@ const theoryOf = (t: TheoryInput): PieceSet => (typeof t === 'string' ? resolveT
 
 function classString(c: ClassInput, g: readonly [number, number] | undefined, name: string): string {
   if (typeof c === 'string') return c;
-  if (!g) throw new AppError('invalid_argument', `${name}: expected a grassmannian [k, n] with a partition, received none`, { path: 'grassmannian' });
+  if (!g) throw new CodedError('invalid_argument', { what: `${name}`, expected: 'a grassmannian [k, n] with a partition', received: 'none' }, { path: 'grassmannian' });
   return stringOfPartition(c, { k: g[0], n: g[1] }, name);
 }
 
@@ -79,11 +79,11 @@ export async function table(options: { readonly theory: TheoryInput; readonly gr
 /** Every puzzle of a boundary, lazily: six clockwise side strings, or `triangle: [λ, μ, ν]` (ν read left to right). */
 export function* enumeratePuzzles(options: { readonly theory: TheoryInput; readonly sides?: readonly string[]; readonly triangle?: readonly [string, string, string] }): Generator<Puzzle> {
   const sides = options.triangle ? structureConstantSides(...options.triangle) : options.sides;
-  if (!sides) throw new AppError('invalid_argument', 'Boundary: expected sides or triangle, received neither', { path: 'sides' });
+  if (!sides) throw new CodedError('invalid_argument', { what: 'Boundary', expected: 'sides or triangle', received: 'neither' }, { path: 'sides' });
   yield* enumerateEngine(regionOfSides(sides), sides, theoryOf(options.theory));
 }
 
-/** Reads and validates a claim file; throws an `AppError` with the JSON path of the first mistake. */
+/** Reads and validates a claim file; throws an `CodedError` with the JSON path of the first mistake. */
 export function loadClaim(file: string): Claim {
   return loadClaimFile(file);
 }

@@ -1,3 +1,4 @@
+import type { ErrorParts } from '../errors/index.js';
 /**
  * Affine integer expressions in the family's variables, such as `a+b`, `2*a+1` or `n-1`.
  * They are parsed by a small grammar of our own; user input is never evaluated as code.
@@ -14,12 +15,22 @@ export type ExpressionInput = number | string;
 
 export const EXPRESSION_PATTERN = /^\s*[+-]?\s*(\d+|[A-Za-z][A-Za-z0-9_]*|\d+\s*\*\s*[A-Za-z][A-Za-z0-9_]*)(\s*[+-]\s*(\d+|[A-Za-z][A-Za-z0-9_]*|\d+\s*\*\s*[A-Za-z][A-Za-z0-9_]*))*\s*$/;
 
+/** Error parts with the variable values where they occur appended to what was received. */
+export function atValues(parts: ErrorParts, values: Readonly<Record<string, number>>): ErrorParts {
+  return { ...parts, received: `${parts.received} at ${valuesText(values)}` };
+}
+
+/** Why an expression is malformed: the message parts of an `Expression` error. */
+export interface ExpressionParseError {
+  readonly error: ErrorParts;
+}
+
 /** Parses an expression, or returns a reason it is malformed. */
-export function parseAffine(input: ExpressionInput): Affine | { error: string } {
+export function parseAffine(input: ExpressionInput): Affine | ExpressionParseError {
   if (typeof input === 'number') {
-    return Number.isSafeInteger(input) ? { constant: input, coefficients: {} } : { error: `an integer, received ${input}` };
+    return Number.isSafeInteger(input) ? { constant: input, coefficients: {} } : { error: { what: 'Expression', expected: 'an integer', received: `${input}` } };
   }
-  if (!EXPRESSION_PATTERN.test(input)) return { error: `an integer, a variable name or a sum such as 'a+b' or '2*a+1', received '${input}'` };
+  if (!EXPRESSION_PATTERN.test(input)) return { error: { what: 'Expression', expected: "an integer, a variable name or a sum such as 'a+b' or '2*a+1'", received: `'${input}'` } };
   const coefficients: Record<string, number> = {};
   let constant = 0;
   const terms = input.replace(/\s+/g, '').match(/[+-]?[^+-]+/g) ?? [];
@@ -36,7 +47,7 @@ export function parseAffine(input: ExpressionInput): Affine | { error: string } 
   return { constant, coefficients };
 }
 
-export function isParseError(a: Affine | { error: string }): a is { error: string } {
+export function isParseError(a: Affine | ExpressionParseError): a is ExpressionParseError {
   return 'error' in a;
 }
 

@@ -1,6 +1,6 @@
 import type { z } from 'zod';
-import { AppError } from '../errors.js';
-import { issuePath } from './zod-issue.js';
+import { CodedError, type ErrorParts } from '../errors/index.js';
+import { describeValue, hasSchemaMessage, issueExpected, issuePath, schemaMessageParts, valueAt } from './zod-issue.js';
 
 type Issue = z.core.$ZodIssue;
 
@@ -51,22 +51,10 @@ function what(path: readonly PropertyKey[]): string {
   return LABELS[last] ?? last.charAt(0).toUpperCase() + last.slice(1);
 }
 
-function describe(value: unknown): string {
-  if (value === undefined) return 'nothing';
-  const s = JSON.stringify(value);
-  return s === undefined ? String(value) : s.length > 60 ? `${s.slice(0, 57)}...` : s;
-}
-
-function at(input: unknown, path: readonly PropertyKey[]): unknown {
-  let v = input;
-  for (const p of path) v = v && typeof v === 'object' ? (v as Record<PropertyKey, unknown>)[p] : undefined;
-  return v;
-}
-
 // A union of a name and an object: when the input is an object, the object branch says what is wrong.
 function innermost(issue: Issue, input: unknown): { issue: Issue; path: PropertyKey[] } {
   if (issue.code === 'invalid_union' && issue.errors.length > 0 && !('note' in issue && issue.note)) {
-    const received = at(input, issue.path);
+    const received = valueAt(input, issue.path);
     const branch = issue.errors.find((errs) => errs.length > 0 && !(errs[0]!.code === 'invalid_type' && errs[0]!.path.length === 0) && !(errs[0]!.code === 'invalid_value' && errs[0]!.path.length === 0));
     if (branch && received !== null && typeof received === 'object') {
       const inner = innermost({ ...branch[0]!, path: [...issue.path, ...branch[0]!.path] } as Issue, input);
@@ -76,35 +64,28 @@ function innermost(issue: Issue, input: unknown): { issue: Issue; path: Property
   return { issue, path: [...issue.path] };
 }
 
-function ours(message: string): boolean {
-  return /^[^:]+: expected /.test(message) && !/^(Invalid|Too small|Too big)\b/.test(message);
-}
-
-/** Turns the first zod issue of a claim into an `invalid_claim` error in our grammar, with a hint when one helps. */
-export function claimZodError(error: z.ZodError, input: unknown, file?: string): AppError {
+/** Turns the first zod issue of a claim (parsed with `parseMarked`) into an `invalid_claim` error, with a hint when one helps. */
+export function claimZodError(error: z.ZodError, input: unknown, file?: string): CodedError {
   const { issue, path } = innermost(error.issues[0]!, input);
-  const received = at(input, path);
-  const label = what(path);
-  let message: string;
+  const value = valueAt(input, path);
+  const received = describeValue(value);
+  const ours = hasSchemaMessage(issue);
+  let parts: ErrorParts;
   let hint: string | undefined;
   switch (issue.code) {
     case 'unrecognized_keys':
-      message = `Unknown key: expected only the documented keys, received ${issue.keys.map((k) => `'${k}'`).join(', ')}`;
+      parts = { what: 'Unknown key', expected: 'only the documented keys', received: issue.keys.map((k) => `'${k}'`).join(', ') };
       hint = "check the spelling; 'puzzlesweep schema' writes the JSON Schema that lists every key";
       break;
     case 'invalid_type':
-      message = ours(issue.message) ? `${issue.message.replace(/, received .*$/, '')}, received ${describe(received)}` : `${label}: expected ${issue.expected}, received ${received === undefined ? 'nothing' : describe(received)}`;
-      if (received === undefined) hint = `add the required key '${String(path[path.length - 1] ?? '')}'`;
-      break;
     case 'invalid_value':
-      message = ours(issue.message)
-        ? `${issue.message}, received ${describe(received)}`
-        : `${label}: expected ${issue.values.length === 1 ? describe(issue.values[0]) : `one of ${issue.values.map((v) => describe(v).replace(/^"|"$/g, "'")).join(' | ')}`}, received ${describe(received)}`;
+      // The value found, whatever the message says it should be.
+      parts = ours ? { ...schemaMessageParts(issue.message, received), received } : { what: what(path), expected: issueExpected(issue), received };
+      if (issue.code === 'invalid_type' && value === undefined) hint = `add the required key '${String(path[path.length - 1] ?? '')}'`;
       break;
     default:
-      message = ours(issue.message) ? issue.message : `${label}: expected ${issue.message.replace(/^(Invalid input|Too small|Too big): expected /i, '')}`;
-      message = /received/.test(message) ? message : `${message}, received ${describe(received)}`;
+      parts = ours ? schemaMessageParts(issue.message, received) : { what: what(path), expected: issueExpected(issue), received };
   }
   if (path[path.length - 1] === 'id' && issue.code !== 'invalid_type') hint = 'lower-case letters and digits joined by single hyphens';
-  return new AppError('invalid_claim', message, { path: issuePath(path), ...(file ? { file } : {}), ...(hint ? { hint } : {}) });
+  return new CodedError('invalid_claim', parts, { path: issuePath(path), ...(file ? { file } : {}), ...(hint ? { hint } : {}) });
 }

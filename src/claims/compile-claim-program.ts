@@ -1,5 +1,6 @@
 import { claimSchema, type Claim } from './claim-schema.js';
 import { claimZodError } from './claim-zod-error.js';
+import { parseMarked } from './zod-issue.js';
 import { canonicalClaimJson, claimFingerprint, ENGINE_VERSION } from './claim-fingerprint.js';
 import { compileClaim, type CompiledClaim } from './compile-claim.js';
 import { measureDef } from './measures/measure-registry.js';
@@ -38,7 +39,7 @@ export interface ClaimProgram extends CompiledClaim {
 
 /** The only compile: claim JSON (as read) to a typed program; every error is coded with its JSON path. */
 export function compileClaimProgram(json: unknown, file?: string, max?: Readonly<Record<string, number>>): ClaimProgram {
-  const parsed = claimSchema.safeParse(json);
+  const parsed = parseMarked(claimSchema, json);
   if (!parsed.success) throw claimZodError(parsed.error, json, file);
   return programOf(parsed.data, json, file, max);
 }

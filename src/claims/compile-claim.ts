@@ -1,6 +1,6 @@
 import { isBuiltinTheory, makeRegion, theoryPieceSet, valueRing, type PieceSet } from '../engine/index.js';
-import { AppError, toAppError } from '../errors.js';
-import { addAffine, boxCorners, boxPoints, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
+import { CodedError, toCodedError } from '../errors/index.js';
+import { addAffine, atValues, boxCorners, boxPoints, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
 import type { CheckContext, Fail, Where } from './compile-context.js';
 import { measureDef } from './measures/measure-registry.js';
 import { relationDef } from './relations/relation-registry.js';
@@ -36,21 +36,21 @@ export interface CompiledClaim {
 }
 
 function failer(file?: string): Fail {
-  return (message, path, hint) => {
-    throw new AppError('invalid_claim', message, { path, ...(file ? { file } : {}), ...(hint ? { hint } : {}) });
+  return (parts, path, hint) => {
+    throw new CodedError('invalid_claim', parts, { path, ...(file ? { file } : {}), ...(hint ? { hint } : {}) });
   };
 }
 
 function resolve(t: TheoryInput, path: string, file: string | undefined, fail: Fail): PieceSet {
   if (typeof t === 'string') {
-    if (!isBuiltinTheory(t)) fail(`Theory: expected a built-in theory, received '${t}'`, path);
+    if (!isBuiltinTheory(t)) fail({ what: 'Theory', expected: 'a built-in theory', received: `'${t}'` }, path);
     return theoryPieceSet(t);
   }
   try {
     return pieceSetFromJson(t, file, path);
   } catch (e) {
-    const err = e as AppError;
-    return fail(err.message, err.path ?? path, err.hint);
+    const err = toCodedError(e);
+    return fail(err.parts, err.path ?? path, err.hint);
   }
 }
 
@@ -63,7 +63,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   for (const [pieces, path] of [[left, 'theory'], [right, 'compare.rightTheory']] as const) {
     if (claim.compare.measure.type === 'value' && valueRing(pieces).kind === 'fraction') {
       fail(
-        `Theory values: expected integers or polynomials for a swept value, received quotients (piece set '${pieces.name}' has weight formulas in t or with '/')`,
+        { what: 'Theory values', expected: 'integers or polynomials for a swept value', received: `quotients (piece set '${pieces.name}' has weight formulas in t or with '/')` },
         path,
         'count such boundaries with `count`; sweeping quotient-valued theories is not supported yet (README, "Theories")',
       );
@@ -71,19 +71,19 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   }
   const alphabet = [...left.boundaryLabels].sort().join(' ');
   if ([...right.boundaryLabels].sort().join(' ') !== alphabet) {
-    fail(`Right-hand theory labels: expected the boundary labels of the claim theory (${alphabet}), received ${[...right.boundaryLabels].join(' ')}`, 'compare.rightTheory');
+    fail({ what: 'Right-hand theory labels', expected: `the boundary labels of the claim theory (${alphabet})`, received: `${[...right.boundaryLabels].join(' ')}` }, 'compare.rightTheory');
   }
 
   const variables = claim.family.variables.map((v, i) => {
     const max = rangeOverride?.[v.name] ?? v.max;
-    if (claim.family.variables.findIndex((w) => w.name === v.name) !== i) fail(`Variable name: expected distinct names, received '${v.name}' twice`, `family.variables[${i}].name`);
-    if (v.min > max) fail(`Variable range: expected min ≤ max, received ${v.name} from ${v.min} to ${max}`, `family.variables[${i}]`, rangeOverride?.[v.name] !== undefined ? 'the --max bound is below the declared minimum' : undefined);
+    if (claim.family.variables.findIndex((w) => w.name === v.name) !== i) fail({ what: 'Variable name', expected: 'distinct names', received: `'${v.name}' twice` }, `family.variables[${i}].name`);
+    if (v.min > max) fail({ what: 'Variable range', expected: 'min ≤ max', received: `${v.name} from ${v.min} to ${max}` }, `family.variables[${i}]`, rangeOverride?.[v.name] !== undefined ? 'the --max bound is below the declared minimum' : undefined);
     return { name: v.name, min: v.min, max };
   });
   if (rangeOverride) {
     for (const name of Object.keys(rangeOverride)) {
       if (!variables.some((v) => v.name === name)) {
-        throw new AppError('invalid_argument', `Variable bound: expected one of ${variables.map((v) => `'${v.name}'`).join(' | ') || 'no variables'}, received '${name}'`, { path: 'max' });
+        throw new CodedError('invalid_argument', { what: 'Variable bound', expected: `one of ${variables.map((v) => `'${v.name}'`).join(' | ') || 'no variables'}`, received: `'${name}'` }, { path: 'max' });
       }
     }
   }
@@ -92,9 +92,9 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const declared = variables.map((v) => `'${v.name}'`).join(' | ') || 'none declared';
   const expr = (input: ExpressionInput, path: string): Affine => {
     const a = parseAffine(input);
-    if (isParseError(a)) return fail(`Expression: expected ${a.error}`, path);
+    if (isParseError(a)) return fail(a.error, path);
     for (const name of Object.keys(a.coefficients)) {
-      if (!(name in ranges)) fail(`Variable: expected one of ${declared}, received '${name}'`, path, `declare it in family.variables, e.g. { "name": "${name}", "min": 1, "max": 3 }`);
+      if (!(name in ranges)) fail({ what: 'Variable', expected: `one of ${declared}`, received: `'${name}'` }, path, `declare it in family.variables, e.g. { "name": "${name}", "min": 1, "max": 3 }`);
     }
     return a;
   };
@@ -109,7 +109,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const lengths = claim.family.sides.map((s, i) => expr(s, `family.sides[${i}]`));
   lengths.forEach((l, i) => {
     const bad = cornerWhere((v) => evalAffine(l, v) >= 0);
-    if (bad) fail(`Side length: expected a nonnegative length, received ${evalAffine(l, bad)} at ${valuesText(bad)}`, `family.sides[${i}]`, 'narrow the variable ranges');
+    if (bad) fail({ what: 'Side length', expected: 'a nonnegative length', received: `${evalAffine(l, bad)} at ${valuesText(bad)}` }, `family.sides[${i}]`, 'narrow the variable ranges');
   });
   const gap1 = addAffine(addAffine(lengths[0]!, lengths[1]!), addAffine(lengths[3]!, lengths[4]!), -1);
   const gap2 = addAffine(addAffine(lengths[1]!, lengths[2]!), addAffine(lengths[4]!, lengths[5]!), -1);
@@ -117,7 +117,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   if (open) {
     const at = lengths.map((l) => evalAffine(l, open));
     fail(
-      `Side lengths do not close: expected s1+s2 = s4+s5 and s2+s3 = s5+s6 for all values, received ${at.join(',')} at ${valuesText(open)}`,
+      { what: 'Side lengths do not close', expected: 's1+s2 = s4+s5 and s2+s3 = s5+s6 for all values', received: `${at.join(',')} at ${valuesText(open)}` },
       'family.sides',
       'e.g. triangle ["n",0,"n",0,"n",0], parallelogram ["a","b",0,"a","b",0], hexagon ["a","b","c","a+b-c"...] must close identically',
     );
@@ -146,8 +146,8 @@ function checkRegions(variables: readonly { name: string; min: number; max: numb
       try {
         makeRegion(lengths.map((l) => evalAffine(l, values)));
       } catch (e) {
-        const err = toAppError(e);
-        fail(`${err.message} at ${valuesText(values)}`, 'family.sides', err.hint);
+        const err = toCodedError(e);
+        fail(atValues(err.parts, values), 'family.sides', err.hint);
       }
       return;
     }
@@ -167,13 +167,13 @@ function compileConditions(claim: Claim, lengths: Affine[], pieces: PieceSet, ex
   claim.family.conditions.forEach((c, k) => {
     const path = `family.conditions[${k}]`;
     if (c.type === 'sameContent') {
-      if (new Set(c.sides).size !== c.sides.length) fail(`Same-content sides: expected distinct sides, received ${c.sides.join(',')}`, `${path}.sides`);
+      if (new Set(c.sides).size !== c.sides.length) fail({ what: 'Same-content sides', expected: 'distinct sides', received: `${c.sides.join(',')}` }, `${path}.sides`);
       const [first, ...rest] = c.sides.map((s) => s - 1);
       for (const s of rest) {
         const bad = cornerWhere((v) => evalAffine(lengths[first!]!, v) === evalAffine(lengths[s]!, v));
         if (bad) {
           fail(
-            `Same-content sides: expected equal lengths, received side ${first! + 1} of length ${evalAffine(lengths[first!]!, bad)} and side ${s + 1} of length ${evalAffine(lengths[s]!, bad)} at ${valuesText(bad)}`,
+            { what: 'Same-content sides', expected: 'equal lengths', received: `side ${first! + 1} of length ${evalAffine(lengths[first!]!, bad)} and side ${s + 1} of length ${evalAffine(lengths[s]!, bad)} at ${valuesText(bad)}` },
             `${path}.sides`,
             'sides with the same number of 0s and of 1s have the same length',
           );
@@ -182,7 +182,7 @@ function compileConditions(claim: Claim, lengths: Affine[], pieces: PieceSet, ex
       }
     } else {
       if (!pieces.boundaryLabels.includes(c.label)) {
-        fail(`Label: expected one of ${pieces.boundaryLabels.map((l) => `'${l}'`).join(' | ')}, received '${c.label}'`, `${path}.label`);
+        fail({ what: 'Label', expected: `one of ${pieces.boundaryLabels.map((l) => `'${l}'`).join(' | ')}`, received: `'${c.label}'` }, `${path}.label`);
       }
       counts.push({ side: c.side - 1, label: c.label, count: expr(c.count, `${path}.count`) });
     }

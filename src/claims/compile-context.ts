@@ -1,8 +1,9 @@
+import type { ErrorParts } from '../errors/index.js';
 import type { PieceSet } from '../engine/index.js';
 import type { Affine, ExpressionInput } from './affine.js';
 
 /** Throws the coded claim error at a JSON path. */
-export type Fail = (message: string, path: string, hint?: string) => never;
+export type Fail = (parts: ErrorParts, path: string, hint?: string) => never;
 
 /** The first variable assignment where a condition fails, or undefined when it holds everywhere. */
 export type Where = (pred: (values: Record<string, number>) => boolean) => Record<string, number> | undefined;

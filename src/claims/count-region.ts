@@ -21,7 +21,7 @@ import {
   type Region,
   type SafeInt,
 } from '../engine/index.js';
-import { AppError, toAppError } from '../errors.js';
+import { CodedError, toCodedError } from '../errors/index.js';
 import { hasIntegerWeights } from './resolve-theory.js';
 
 export type RegionValue =
@@ -47,7 +47,9 @@ export function regionOfSides(sides: readonly string[]): Region {
   try {
     return makeRegion(sides.map((s) => [...s].length));
   } catch (e) {
-    throw toAppError(e, '--sides');
+    // The lengths come from the side strings: the error points at the field `sides` (the CLI names its flag).
+    const err = toCodedError(e);
+    throw err.path === 'lengths' || err.path?.startsWith('lengths[') ? err.relocated({ path: 'sides' }) : err;
   }
 }
 
@@ -64,7 +66,7 @@ export function countRegion(
     const kind = options.statistic;
     if (kind !== undefined && !pieces.pieces.some((p) => p.kind === kind)) {
       const kinds = [...new Set(pieces.pieces.map((p) => p.kind))];
-      throw new AppError('invalid_argument', `--statistic: expected a piece kind of ${pieces.name}, one of ${kinds.map((k) => `'${k}'`).join(' | ')}, received '${kind}'`, { path: '--statistic' });
+      throw new CodedError('invalid_argument', { what: 'Statistic kind', expected: `a piece kind of ${pieces.name}, one of ${kinds.map((k) => `'${k}'`).join(' | ')}`, received: `'${kind}'` }, { path: 'statistic' });
     }
     // One sweep gives the number of puzzles, the value and the statistic's distribution.
     const ringKind = valueRing(pieces);
@@ -84,6 +86,6 @@ export function countRegion(
     const distribution = kind === undefined ? undefined : { kind, counts: counts! };
     return { theory: pieces.name, region, sides, ...(completion ? { completion } : {}), puzzles, value, ...(distribution ? { distribution } : {}) };
   } catch (e) {
-    throw toAppError(e, '--sides');
+    throw toCodedError(e);
   }
 }

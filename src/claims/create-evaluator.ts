@@ -1,4 +1,4 @@
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { evalAffine } from './affine.js';
 import { substitutePoly } from '../engine/index.js';
 import { applySideMap, applyTransform } from './boundary-transform.js';
@@ -67,7 +67,7 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     const sides = [...instance.sides];
     const lengths = sides.map((s) => (singleUnitLabels ? s.length : [...s].length));
     if (lengths.some((l, i) => l !== cls.lengths[i])) {
-      throw new AppError('invalid_argument', `Instance sides: expected lengths ${cls.lengths.join(',')} of class ${cls.key}, received ${lengths.join(',')}`, { path: 'instance' });
+      throw new CodedError('invalid_argument', { what: 'Instance sides', expected: `lengths ${cls.lengths.join(',')} of class ${cls.key}`, received: `${lengths.join(',')}` }, { path: 'instance' });
     }
     // The steps compose to one side map unless one completes to a triangle.
     const t = sideMap ? applySideMap(sideMap, lengths, sides) : applyTransform(claim.transform, lengths, sides, compiled.left);

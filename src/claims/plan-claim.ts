@@ -1,5 +1,5 @@
 import { makeRegion } from '../engine/index.js';
-import { AppError, toAppError } from '../errors.js';
+import { CodedError, toCodedError } from '../errors/index.js';
 import { evalAffine } from './affine.js';
 import type { ClaimPlan, Instance, SizeClass } from './claim-api.js';
 import type { Claim } from './claim-schema.js';
@@ -166,7 +166,7 @@ export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
     return l;
   };
   const outOfRange = (cls: SizeClass, index: bigint) =>
-    new AppError('invalid_argument', `Instance index: expected 0 ≤ index < ${layout(cls).count} in class ${cls.key}, received ${index}`, { path: 'instance' });
+    new CodedError('invalid_argument', { what: 'Instance index', expected: `0 ≤ index < ${layout(cls).count} in class ${cls.key}`, received: `${index}` }, { path: 'instance' });
 
   const { relationVariables } = program;
   return {
@@ -273,13 +273,13 @@ export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
       }
       const names = compiled.variables.map((v) => v.name);
       if (Object.keys(values).join(',') !== names.join(',') || Object.values(values).some((v) => !Number.isInteger(v))) {
-        throw new AppError('invalid_argument', `Class key: expected values of ${names.join(', ') || 'no variables'} such as '${classKey(Object.fromEntries(names.map((n) => [n, 1])))}', received '${key}'`, { path: 'instance' });
+        throw new CodedError('invalid_argument', { what: 'Class key', expected: `values of ${names.join(', ') || 'no variables'} such as '${classKey(Object.fromEntries(names.map((n) => [n, 1])))}'`, received: `'${key}'` }, { path: 'instance' });
       }
       const cls = sizeClassFor(compiled, values);
       try {
         makeRegion(cls.lengths);
       } catch (e) {
-        throw toAppError(e, 'instance');
+        throw toCodedError(e, 'instance');
       }
       return cls;
     },

@@ -1,8 +1,9 @@
 import { readFileSync } from 'node:fs';
-import { buildPieceSet, EngineError, isBuiltinTheory, parseWeightFormula, theoryPieceSet, valueRing, type PieceSet, type WeightSpec } from '../engine/index.js';
-import { AppError, toAppError } from '../errors.js';
+import { buildPieceSet, isBuiltinTheory, parseWeightFormula, theoryPieceSet, valueRing, type PieceSet, type WeightSpec } from '../engine/index.js';
+import { CodedError, toCodedError } from '../errors/index.js';
+import { jsonSyntaxError } from './json-syntax-error.js';
 import { pieceSetSchema, type PieceSetInput } from './piece-set-schema.js';
-import { fromZodError } from './zod-issue.js';
+import { fromZodError, parseMarked } from './zod-issue.js';
 
 function toWeight(w: PieceSetInput['pieces'][number]['weight'], index: number): WeightSpec | undefined {
   if (w === undefined) return undefined;
@@ -12,7 +13,7 @@ function toWeight(w: PieceSetInput['pieces'][number]['weight'], index: number): 
     try {
       return { type: 'formula', text: w.formula, formula: parseWeightFormula(w.formula) };
     } catch (e) {
-      if (e instanceof EngineError) throw new EngineError(e.code, e.message, `pieces[${index}].weight.formula`, e.hint);
+      if (e instanceof CodedError) throw e.relocated({ path: `pieces[${index}].weight.formula` });
       throw e;
     }
   }
@@ -21,7 +22,7 @@ function toWeight(w: PieceSetInput['pieces'][number]['weight'], index: number): 
 
 /** Builds a custom piece set from parsed JSON; errors carry the JSON path inside `file`. */
 export function pieceSetFromJson(data: unknown, file?: string, prefix = ''): PieceSet {
-  const parsed = pieceSetSchema.safeParse(data);
+  const parsed = parseMarked(pieceSetSchema, data);
   if (!parsed.success) throw fromZodError(parsed.error, 'invalid_piece_set', data, file, prefix);
   const spec = parsed.data;
   try {
@@ -40,7 +41,7 @@ export function pieceSetFromJson(data: unknown, file?: string, prefix = ''): Pie
     valueRing(set); // rejects a set that mixes the strip letters y and t
     return set;
   } catch (e) {
-    throw toAppError(e, prefix, file);
+    throw toCodedError(e, prefix, file);
   }
 }
 
@@ -50,17 +51,14 @@ export function readJsonFile(file: string, what: string): unknown {
   try {
     text = readFileSync(file, 'utf8');
   } catch {
-    throw new AppError('file_not_found', `${what}: expected a readable file, received '${file}'`, { path: file, hint: 'check the path' });
+    throw new CodedError('file_not_found', { what, file }, { path: file });
   }
   try {
     return JSON.parse(text) as unknown;
   } catch (e) {
-    const message = (e as Error).message;
-    const where = jsonErrorPosition(text, message);
-    throw new AppError('invalid_json', `${what}: expected valid JSON, received ${message.replace(/ in JSON at position \d+.*$/, '')}`, {
-      file,
-      ...(where ? { path: `line ${where.line}, column ${where.column}` } : {}),
-    });
+    const syntax = jsonSyntaxError(text);
+    if (!syntax) throw toCodedError(e);
+    throw new CodedError('invalid_json', { what, token: syntax.expected, received: syntax.received }, { file, path: `line ${syntax.line}, column ${syntax.column}`, cause: e });
   }
 }
 
@@ -68,11 +66,7 @@ export function readJsonFile(file: string, what: string): unknown {
 export function resolveTheory(nameOrPath: string): PieceSet {
   if (isBuiltinTheory(nameOrPath)) return theoryPieceSet(nameOrPath);
   if (!/[./\\]/.test(nameOrPath)) {
-    try {
-      return theoryPieceSet(nameOrPath);
-    } catch (e) {
-      throw toAppError(e, '--theory');
-    }
+    return theoryPieceSet(nameOrPath); // throws unknown_theory at the field `theory` (the CLI names its flag)
   }
   return pieceSetFromJson(readJsonFile(nameOrPath, 'Piece-set file'), nameOrPath);
 }
@@ -80,13 +74,4 @@ export function resolveTheory(nameOrPath: string): PieceSet {
 /** True when every piece weighs an integer, so values are integers rather than polynomials. */
 export function hasIntegerWeights(pieces: PieceSet): boolean {
   return pieces.pieces.every((p) => p.weight.type === 'integer');
-}
-
-/** Line and column (1-based) of a JSON.parse error, from the position its message names (or the end of the text). */
-export function jsonErrorPosition(text: string, message: string): { line: number; column: number } | undefined {
-  const m = / at position (\d+)/.exec(message);
-  const at = m ? Number(m[1]) : /Unexpected end of JSON input/.test(message) ? text.length : undefined;
-  if (at === undefined) return undefined;
-  const before = text.slice(0, at).split('\n');
-  return { line: before.length, column: before[before.length - 1]!.length + 1 };
 }

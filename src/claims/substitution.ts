@@ -1,4 +1,4 @@
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { substitutionStepDef, type SubstitutionStep } from './substitutions/substitution-registry.js';
 
 /** A permutation of y_1..y_M as 1-based images: y_m ↦ y_images[m−1]. */
@@ -10,7 +10,7 @@ export function substitutionFor(steps: readonly SubstitutionStep[], values: Read
   steps.forEach((s, k) => {
     const def = substitutionStepDef(s);
     const bad = def.rangeError(s, values, m);
-    if (bad) throw new AppError('invalid_claim', bad.message, { path: `compare.relation.substitution[${k}]${bad.field ? `.${bad.field}` : ''}` });
+    if (bad) throw new CodedError('invalid_claim', bad.parts, { path: `compare.relation.substitution[${k}]${bad.field ? `.${bad.field}` : ''}` });
     const step = def.images(s, values, m);
     sigma = sigma.map((x) => step[x - 1]!);
   });

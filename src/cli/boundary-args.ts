@@ -1,5 +1,5 @@
 import { structureConstantSides } from '../engine/index.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { grassmannianOfString, parseGrassmannian, parsePartition, partitionOfString, partitionText, stringOfPartition, type Grassmannian } from '../products/partition-strings.js';
 
 export interface BoundaryArgs {
@@ -24,9 +24,9 @@ const list = (text: string) => text.split(',').map((s) => s.trim());
 export function parseClassArgs(args: BoundaryArgs, count: 2 | 3): TriangleEcho {
   const names = count === 3 ? 'λ,μ,ν' : 'λ,μ';
   if (args.partitions !== undefined) {
-    if (args.triangle !== undefined) throw new AppError('invalid_argument', 'Classes: expected one of --triangle or --partitions, received both', { path: '--triangle / --partitions' });
+    if (args.triangle !== undefined) throw new CodedError('invalid_argument', { what: 'Classes', expected: 'one of --triangle or --partitions', received: 'both' }, { path: '--triangle / --partitions' });
     if (args.grassmannian === undefined) {
-      throw new AppError('invalid_argument', 'Grassmannian: expected --grassmannian k,n with --partitions, received none', {
+      throw new CodedError('invalid_argument', { what: 'Grassmannian', expected: '--grassmannian k,n with --partitions', received: 'none' }, {
         path: '--grassmannian',
         hint: `e.g. --partitions ${count === 3 ? '21,1,31' : '21,1'} --grassmannian 3,7`,
       });
@@ -34,23 +34,23 @@ export function parseClassArgs(args: BoundaryArgs, count: 2 | 3): TriangleEcho {
     const g = parseGrassmannian(args.grassmannian);
     const typed = list(args.partitions);
     if (typed.length !== count) {
-      throw new AppError('invalid_argument', `--partitions: expected ${count} comma-separated partitions ${names}, received ${typed.length} ('${args.partitions}')`, { path: '--partitions' });
+      throw new CodedError('invalid_argument', { what: '--partitions', expected: `${count} comma-separated partitions ${names}`, received: `${typed.length} ('${args.partitions}')` }, { path: '--partitions' });
     }
     const parts = typed.map((t) => parsePartition(t));
     return { typed, strings: parts.map((p) => stringOfPartition(p, g)), partitions: parts.map(partitionText), grassmannian: g };
   }
   if (args.triangle === undefined) {
-    throw new AppError('invalid_argument', `Classes: expected --triangle ${names} (0/1 strings) or --partitions ${names} with --grassmannian k,n, received neither`, {
+    throw new CodedError('invalid_argument', { what: 'Classes', expected: `--triangle ${names} (0/1 strings) or --partitions ${names} with --grassmannian k,n`, received: 'neither' }, {
       path: '--triangle / --partitions',
       hint: count === 3 ? 'e.g. --triangle 0101010,0101010,1010100 or --partitions 21,21,321 --grassmannian 3,7' : 'e.g. --partitions 21,1 --grassmannian 3,7',
     });
   }
   const typed = list(args.triangle);
   if (typed.length !== count) {
-    throw new AppError('invalid_argument', `--triangle: expected ${count} comma-separated strings ${names}, received ${typed.length} ('${args.triangle}')`, { path: '--triangle' });
+    throw new CodedError('invalid_argument', { what: '--triangle', expected: `${count} comma-separated strings ${names}`, received: `${typed.length} ('${args.triangle}')` }, { path: '--triangle' });
   }
   if (typed.some((s) => [...s].length !== [...typed[0]!].length)) {
-    throw new AppError('invalid_argument', `--triangle: expected ${names} of one length, received lengths ${typed.map((s) => [...s].length).join(', ')}`, {
+    throw new CodedError('invalid_argument', { what: '--triangle', expected: `${names} of one length`, received: `lengths ${typed.map((s) => [...s].length).join(', ')}` }, {
       path: '--triangle',
       hint: 'λ is read up the NW side, μ down the NE side, ν left to right along the bottom',
     });
@@ -64,7 +64,7 @@ export function parseClassArgs(args: BoundaryArgs, count: 2 | 3): TriangleEcho {
 export function parseBoundary(args: BoundaryArgs): { sides: string[]; triangle?: TriangleEcho } {
   const triangleGiven = args.triangle !== undefined || args.partitions !== undefined;
   if (triangleGiven === (args.sides !== undefined)) {
-    throw new AppError('invalid_argument', `Boundary: expected exactly one of --triangle, --partitions or --sides, received ${triangleGiven ? 'both' : 'neither'}`, {
+    throw new CodedError('invalid_argument', { what: 'Boundary', expected: 'exactly one of --triangle, --partitions or --sides', received: `${triangleGiven ? 'both' : 'neither'}` }, {
       path: '--triangle / --partitions / --sides',
       hint: 'e.g. --triangle 0101010,0101010,1010100, --partitions 21,21,321 --grassmannian 3,7 or --sides 01,1,01,1,01,-',
     });
@@ -76,7 +76,7 @@ export function parseBoundary(args: BoundaryArgs): { sides: string[]; triangle?:
   }
   const parts = list(args.sides!).map((s) => (s === '-' ? '' : s));
   if (parts.length !== 6) {
-    throw new AppError('invalid_argument', `--sides: expected six comma-separated strings, received ${parts.length} ('${args.sides}')`, {
+    throw new CodedError('invalid_argument', { what: '--sides', expected: 'six comma-separated strings', received: `${parts.length} ('${args.sides}')` }, {
       path: '--sides',
       hint: "write an empty side as '-', e.g. --sides 01,-,01,-,10,-",
     });

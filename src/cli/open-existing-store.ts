@@ -1,11 +1,11 @@
 import { existsSync } from 'node:fs';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { openStore, type Store } from '../store/index.js';
 
 /** Opens an existing store for reading; a missing file is an input error, never a new empty store. */
 export function openExistingStore(path: string): Store {
   if (!existsSync(path)) {
-    throw new AppError('file_not_found', `Store: expected an existing SQLite file, received '${path}'`, {
+    throw new CodedError('file_not_found', { what: 'Store', expected: 'an existing SQLite file', file: path }, {
       path: '--db',
       hint: "run 'puzzlesweep run <claim.json>' first, or point --db at your store",
     });

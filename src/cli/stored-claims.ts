@@ -1,5 +1,5 @@
 import { existsSync, statSync } from 'node:fs';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { loadSweepClaim } from '../run/load-sweep-claim.js';
 import { findClaims, type ClaimRecord, type Store } from '../store/index.js';
 
@@ -15,7 +15,7 @@ export function storedClaims(db: Store, ref: string): { claims: ClaimRecord[]; f
     const rows = findClaims(db, claim.fingerprint);
     if (rows.length === 0) {
       const older = findClaims(db, claim.id);
-      throw new AppError('claim_not_found', `Claim '${claim.id}': expected results for its current version ${claim.fingerprint.slice(0, 12)}, received none`, {
+      throw new CodedError('claim_not_found', { what: `Claim '${claim.id}'`, expected: `results for its current version ${claim.fingerprint.slice(0, 12)}`, received: 'none' }, {
         path: ref,
         hint: older.length ? `the store holds ${older.length} older version(s); pass the id '${claim.id}' to see them, or run the claim` : `run 'puzzlesweep run ${ref}' first`,
       });
@@ -24,7 +24,7 @@ export function storedClaims(db: Store, ref: string): { claims: ClaimRecord[]; f
   }
   const rows = findClaims(db, ref);
   if (rows.length === 0) {
-    throw new AppError('claim_not_found', `Claim: expected a claim file, id or fingerprint in the store, received '${ref}'`, {
+    throw new CodedError('claim_not_found', { what: 'Claim', expected: 'a claim file, id or fingerprint in the store', received: `'${ref}'` }, {
       path: 'claim',
       hint: "'puzzlesweep status' lists the stored claims",
     });

@@ -1,6 +1,6 @@
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 
 /** Writes a generated file, creating its directory; a failure names the option that gave the path. */
 export function writeOutputFile(file: string, text: string, option: string): void {
@@ -8,7 +8,7 @@ export function writeOutputFile(file: string, text: string, option: string): voi
     makeDirectories(dirname(file));
     writeFileSync(file, text);
   } catch (e) {
-    throw new AppError('invalid_argument', `Output file: expected a writable path, received '${file}' (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`, {
+    throw new CodedError('invalid_argument', { what: 'Output file', expected: 'a writable path', received: `'${file}' (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})` }, {
       path: option,
       hint: 'choose a file in a directory you can write to',
     });

@@ -2,9 +2,9 @@ import { basename } from 'node:path';
 import { z } from 'zod';
 import { parseClaim, type Claim, type TheoryInput } from '../claims/index.js';
 import { readJsonFile } from '../claims/resolve-theory.js';
-import { fromZodError } from '../claims/zod-issue.js';
+import { fromZodError, parseMarked } from '../claims/zod-issue.js';
 import { isBuiltinTheory } from '../engine/index.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 
 const side = z.number().int().min(1, 'Side number: expected an integer from 1 to 6').max(6, 'Side number: expected an integer from 1 to 6');
 
@@ -55,19 +55,19 @@ export interface DiscoverInput {
 export function theoryInput(arg: string): TheoryInput {
   if (isBuiltinTheory(arg)) return arg;
   if (!/[./\\]/.test(arg)) {
-    throw new AppError('unknown_theory', `Theory: expected 'cohomology' | 'equivariant' | 'k-theory' | 'dual-k-theory' or a piece-set file, received '${arg}'`, { path: '--theory' });
+    throw new CodedError('unknown_theory', { received: arg, choices: ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'], orFile: true }, { path: '--theory' });
   }
   return readJsonFile(arg, 'Piece-set file') as TheoryInput;
 }
 
 /** Validates a discover file's data; the family is checked exactly as a claim's (paths `family.…`). */
 export function parseDiscoverInput(data: unknown, theories: readonly TheoryInput[], file?: string): DiscoverInput {
-  const parsed = fileSchema.safeParse(data);
+  const parsed = parseMarked(fileSchema, data);
   if (!parsed.success) throw fromZodError(parsed.error, 'invalid_claim', data, file);
-  if (parsed.data.family === undefined) throw new AppError('invalid_claim', 'Family: expected an object with sides and variables, received nothing', { path: 'family', ...(file ? { file } : {}) });
-  const space = spaceSchema.safeParse(parsed.data.space ?? {});
+  if (parsed.data.family === undefined) throw new CodedError('invalid_claim', { what: 'Family', expected: 'an object with sides and variables', received: 'nothing' }, { path: 'family', ...(file ? { file } : {}) });
+  const space = parseMarked(spaceSchema, parsed.data.space ?? {});
   if (!space.success) throw fromZodError(space.error, 'invalid_claim', parsed.data.space, file, 'space');
-  if (theories.length === 0) throw new AppError('invalid_argument', 'Theories: expected at least one --theory, received none', { path: '--theory' });
+  if (theories.length === 0) throw new CodedError('invalid_argument', { what: 'Theories', expected: 'at least one --theory', received: 'none' }, { path: '--theory' });
   let family: Claim['family'] | undefined;
   for (const theory of theories) {
     // The family is validated inside a claim so that its errors read exactly as a claim's do.

@@ -1,6 +1,7 @@
-import { EngineError } from './engine-error.js';
+
 import type { PieceSet } from './piece-set.js';
 import { SIDE_NAMES, type Region } from './region.js';
+import { CodedError } from '../errors/index.js';
 
 /** Six clockwise side strings; side 5 may be left open (`null`) to get every completion at once. */
 export type Boundary = readonly [string, string, string, string, string | null, string];
@@ -17,32 +18,22 @@ export function reverseString(s: string): string {
 /** Checks lengths and alphabet of each side; throws `invalid_boundary` naming the side. */
 export function checkBoundary(region: Region, sides: readonly (string | null)[], pieces: PieceSet): Boundary {
   if (sides.length !== 6) {
-    throw new EngineError('invalid_boundary', `Boundary: expected 6 side strings, received ${sides.length}`, 'sides');
+    throw new CodedError('invalid_boundary', { what: 'Boundary', expected: '6 side strings', received: `${sides.length}` }, { path: 'sides' });
   }
   const allowed = new Set(pieces.boundaryLabels);
   sides.forEach((s, i) => {
     if (s === null) {
-      if (i !== 4) throw new EngineError('internal_error', `Open side: expected side 5, received side ${i + 1}`, `sides[${i}]`);
+      if (i !== 4) throw new CodedError('internal_error', { what: 'Open side', expected: 'side 5', received: `side ${i + 1}` }, { path: `sides[${i}]` });
       return;
     }
     const chars = [...s];
     const want = region.lengths[i]!;
     if (chars.length !== want) {
-      throw new EngineError(
-        'invalid_boundary',
-        `${capitalise(SIDE_NAMES[i]!)}: expected ${want} labels, received ${chars.length} ('${s}')`,
-        `sides[${i}]`,
-        want === 0 ? "an empty side is written as '' or '-'" : `the side lengths are ${region.lengths.join(',')}`,
-      );
+      throw new CodedError('invalid_boundary', { what: `${capitalise(SIDE_NAMES[i]!)}`, expected: `${want} labels`, received: `${chars.length} ('${s}')` }, { path: `sides[${i}]`, hint: want === 0 ? "an empty side is written as '' or '-'" : `the side lengths are ${region.lengths.join(',')}` });
     }
     const bad = chars.find((c) => !allowed.has(c));
     if (bad !== undefined) {
-      throw new EngineError(
-        'invalid_boundary',
-        `${capitalise(SIDE_NAMES[i]!)}: expected labels from ${[...allowed].map((l) => `'${l}'`).join(' | ')}, received '${bad}' in '${s}'`,
-        `sides[${i}]`,
-        'internal labels such as 10 never sit on the boundary',
-      );
+      throw new CodedError('invalid_boundary', { what: `${capitalise(SIDE_NAMES[i]!)}`, expected: `labels from ${[...allowed].map((l) => `'${l}'`).join(' | ')}`, received: `'${bad}' in '${s}'` }, { path: `sides[${i}]`, hint: 'internal labels such as 10 never sit on the boundary' });
     }
   });
   return sides as unknown as Boundary;

@@ -1,6 +1,6 @@
 import { checkBoundary } from './boundary.js';
 import { genericWeights, numericLanes } from './count-kernel.js';
-import { EngineError } from './engine-error.js';
+
 import { genericStep } from './generic-sweep.js';
 import { BOTTOM_OPEN, kernelPlan, STEP_END, STEP_START, type KernelPlan } from './kernel-plan.js';
 import { forwardStep, newTable, NumericOverflow, type Lanes } from './numeric-kernel.js';
@@ -10,6 +10,7 @@ import type { Region } from './region.js';
 import type { Semiring } from './semiring.js';
 import type { CountOptions } from './transfer-count.js';
 import { declaredWeigher, type Weigher } from './weigher.js';
+import { CodedError } from '../errors/index.js';
 
 /** Sides in table-index order, most significant first: 1, 2, 3, 4, 6, then 5 (least significant). */
 export const FAMILY_SIDE_ORDER = [0, 1, 2, 3, 5, 4] as const;
@@ -98,7 +99,7 @@ function walkFamily<S>(plan: KernelPlan, candidates: readonly (readonly string[]
     stride[k] = acc;
     acc *= counts[k]!;
   }
-  if (acc !== size) throw new EngineError('internal_error', `Family table: expected ${size} entries, received ${acc}`, 'candidates');
+  if (acc !== size) throw new CodedError('internal_error', { what: 'Family table', expected: `${size} entries`, received: `${acc}` }, { path: 'candidates' });
   const leaf = (final: S, k: number, base: number) => {
     // Sides 1, 2, 3, 4, 6 are now fixed up to repeated candidates: one entry per remaining choice.
     if (k === 5) return tables.harvest(final, side5Keys, base);
@@ -198,13 +199,13 @@ function genericTables<T>(plan: KernelPlan, semiring: Semiring<T>, weights: read
  * completions kept. No object is allocated per boundary for integer and modular semirings.
  */
 export function countFamily<T>(region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet, options: CountOptions<T>): FamilyTable<T> {
-  if (candidates.length !== 6) throw new EngineError('invalid_boundary', `Family candidates: expected 6 lists, received ${candidates.length}`, 'candidates');
+  if (candidates.length !== 6) throw new CodedError('invalid_boundary', { what: 'Family candidates', expected: '6 lists', received: `${candidates.length}` }, { path: 'candidates' });
   const filler = pieces.boundaryLabels[0]!;
   candidates.forEach((list, k) => {
     for (const s of list) checkBoundary(region, region.lengths.map((len, j) => (j === k ? s : filler.repeat(len))), pieces);
   });
   const plan = kernelPlan(region, pieces);
-  if (!plan.fits) throw new EngineError('invalid_region', `Family region: expected profiles below 2^53, received side lengths ${region.lengths.join(',')}`, 'lengths', 'count these boundaries one by one');
+  if (!plan.fits) throw new CodedError('invalid_region', { what: 'Family region', expected: 'profiles below 2^53', received: `side lengths ${region.lengths.join(',')}` }, { path: 'lengths', hint: 'count these boundaries one by one' });
   const counts = candidates.map((c) => c.length);
   const size = counts.reduce((x, y) => x * y, 1);
   const { semiring } = options;

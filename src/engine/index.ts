@@ -1,5 +1,4 @@
 /** The engine's public surface: everything else in the project imports from here. */
-export * from './engine-error.js';
 export * from './region.js';
 export * from './lattice.js';
 export * from './piece-set.js';

@@ -1,6 +1,7 @@
-import { EngineError } from './engine-error.js';
+
 import type { Orientation } from './lattice.js';
 import type { FormulaNode } from './weight-formula.js';
+import { CodedError } from '../errors/index.js';
 
 /** How a piece contributes to the value: a constant, a named formal variable, y_j − y_i by position, or a formula. */
 export type WeightSpec =
@@ -87,7 +88,7 @@ export function buildPieceSet(spec: PieceSetSpec): PieceSet {
   spec.pieces.forEach((p, i) => {
     const name = p.name ?? `piece-${i + 1}`;
     if (p.orientations.length === 0) {
-      throw new EngineError('invalid_piece_set', `Piece orientations: expected at least one of 'up' | 'down', received none`, `pieces[${i}].orientations`);
+      throw new CodedError('invalid_piece_set', { what: 'Piece orientations', expected: `at least one of 'up' | 'down'`, received: 'none' }, { path: `pieces[${i}].orientations` });
     }
     for (const orientation of p.orientations) {
       const turns = p.rotations ? [0, 1, 2] : [0];
@@ -98,12 +99,7 @@ export function buildPieceSet(spec: PieceSetSpec): PieceSet {
         const key = `${orientation}:${v}`;
         const earlier = seen.get(key);
         if (earlier !== undefined) {
-          throw new EngineError(
-            'invalid_piece_set',
-            `Duplicate piece: expected each ${orientation} triangle ${edgeText(edgeLabels(orientation, labels))} once, received it in '${earlier}' and '${name}'`,
-            `pieces[${i}]`,
-            'remove one of them, or give them different labels',
-          );
+          throw new CodedError('invalid_piece_set', { what: 'Duplicate piece', expected: `each ${orientation} triangle ${edgeText(edgeLabels(orientation, labels))} once`, received: `it in '${earlier}' and '${name}'` }, { path: `pieces[${i}]`, hint: 'remove one of them, or give them different labels' });
         }
         seen.set(key, name);
         pieces.push({ name, kind: p.kind ?? name, orientation, labels, weight: p.weight ?? ONE });
@@ -117,14 +113,14 @@ export function buildPieceSet(spec: PieceSetSpec): PieceSet {
 
 function checkBoundaryLabels(boundaryLabels: readonly string[]): void {
   if (boundaryLabels.length === 0) {
-    throw new EngineError('invalid_piece_set', 'Boundary labels: expected at least one label, received none', 'boundaryLabels');
+    throw new CodedError('invalid_piece_set', { what: 'Boundary labels', expected: 'at least one label', received: 'none' }, { path: 'boundaryLabels' });
   }
   const unique = new Set<string>();
   boundaryLabels.forEach((l, i) => {
     if ([...l].length !== 1 || l === ',' || l === '-') {
-      throw new EngineError('invalid_piece_set', `Boundary label: expected a single character other than ',' and '-', received '${l}'`, `boundaryLabels[${i}]`, 'boundary strings are read one character per edge');
+      throw new CodedError('invalid_piece_set', { what: 'Boundary label', expected: `a single character other than ',' and '-'`, received: `'${l}'` }, { path: `boundaryLabels[${i}]`, hint: 'boundary strings are read one character per edge' });
     }
-    if (unique.has(l)) throw new EngineError('invalid_piece_set', `Boundary label: expected distinct labels, received '${l}' twice`, `boundaryLabels[${i}]`);
+    if (unique.has(l)) throw new CodedError('invalid_piece_set', { what: 'Boundary label', expected: 'distinct labels', received: `'${l}' twice` }, { path: `boundaryLabels[${i}]` });
     unique.add(l);
   });
 }
@@ -147,12 +143,7 @@ function checkMatchable(spec: PieceSetSpec, pieces: readonly Piece[]): void {
       const other = p.orientation === 'up' ? 'down' : 'up';
       if (!boundary.has(l) && !present.has(`${other}:${dir}:${l}`)) {
         const index = spec.pieces.findIndex((q) => (q.name ?? '') === p.name);
-        throw new EngineError(
-          'invalid_piece_set',
-          `Unmatched label: expected some ${other} piece with '${l}' on its ${DIRECTION_NAME[dir]} edge, received none (piece '${p.name}')`,
-          index >= 0 ? `pieces[${index}].edges.${DIRECTION_NAME[dir]}` : 'pieces',
-          `'${l}' is not a boundary label, so it must be matched inside; add the matching piece or make '${l}' a boundary label`,
-        );
+        throw new CodedError('invalid_piece_set', { what: 'Unmatched label', expected: `some ${other} piece with '${l}' on its ${DIRECTION_NAME[dir]} edge`, received: `none (piece '${p.name}')` }, { path: index >= 0 ? `pieces[${index}].edges.${DIRECTION_NAME[dir]}` : 'pieces', hint: `'${l}' is not a boundary label, so it must be matched inside; add the matching piece or make '${l}' a boundary label` });
       }
     });
   }

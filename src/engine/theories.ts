@@ -1,5 +1,6 @@
-import { EngineError } from './engine-error.js';
+
 import { buildPieceSet, type PieceSet, type PieceSpec } from './piece-set.js';
+import { CodedError } from '../errors/index.js';
 
 export const BUILTIN_THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'] as const;
 export type BuiltinTheory = (typeof BUILTIN_THEORIES)[number];
@@ -43,12 +44,7 @@ export function isBuiltinTheory(name: string): name is BuiltinTheory {
 /** The piece set of a built-in theory; throws `unknown_theory` listing the valid names. */
 export function theoryPieceSet(name: string): PieceSet {
   if (!isBuiltinTheory(name)) {
-    throw new EngineError(
-      'unknown_theory',
-      `Unknown theory: expected one of ${BUILTIN_THEORIES.map((t) => `'${t}'`).join(' | ')}, received '${name}'`,
-      'theory',
-      'or give the path of a custom piece-set JSON file',
-    );
+    throw new CodedError('unknown_theory', { received: name, choices: BUILTIN_THEORIES }, { path: 'theory', hint: 'or give the path of a custom piece-set JSON file' });
   }
   let set = cache.get(name);
   if (!set) {

@@ -1,6 +1,6 @@
 import { checkBoundary, reverseString, type Boundary } from './boundary.js';
 import { genericWeights, numericLanes } from './count-kernel.js';
-import { EngineError } from './engine-error.js';
+
 import { BYTES_PER_PROFILE, BYTES_PER_TERM, genericCountFixed, genericSweepOpen } from './generic-sweep.js';
 import { fillingCountSemiring } from './semirings/integer-semiring.js';
 import { kernelPlan, stepLabels, type KernelPlan } from './kernel-plan.js';
@@ -12,6 +12,7 @@ import { compilePlan, expandStep, type TransferPlan } from './transfer-plan.js';
 import { fitsNumeric, sweepNumeric, type WeightTable } from './transfer-numeric.js';
 import { declaredWeigher, type Weigher } from './weigher.js';
 import { tupleSemiring } from './semirings/tuple-semiring.js';
+import { CodedError } from '../errors/index.js';
 
 export type { ProgressCallback, SweepStrategy } from './numeric-kernel.js';
 
@@ -109,15 +110,10 @@ export function sweepHooks(options: { onProgress?: ProgressCallback | undefined;
 }
 
 /** The coded error a sweep stops with when its tables would outgrow the memory limit. */
-export function memoryLimitError(bytes: number, limit: number, step: number, total?: number): EngineError {
+export function memoryLimitError(bytes: number, limit: number, step: number, total?: number): CodedError {
   const mb = (b: number) => `${Math.ceil(b / 2 ** 20)} MB`;
   const when = total === undefined ? `at step ${step}` : `estimated before starting (${step} live profiles at the widest of ${total} steps)`;
-  return new EngineError(
-    'limit_exceeded',
-    `Memory: expected the sweep's tables to stay within ${mb(limit)}, received ${mb(bytes)} ${when}`,
-    'memory limit',
-    'count a smaller region, use a modular identity test (sweeps without --exact), or give Node more memory (node --max-old-space-size=MB)',
-  );
+  return new CodedError('limit_exceeded', { what: 'Memory', expected: `the sweep's tables to stay within ${mb(limit)}`, received: `${mb(bytes)} ${when}` }, { path: 'memory limit', hint: 'count a smaller region, use a modular identity test (sweeps without --exact), or give Node more memory (node --max-old-space-size=MB)' });
 }
 
 function countOne<T>(region: Region, boundary: Boundary, pieces: PieceSet, options: CountOptions<T>): T {

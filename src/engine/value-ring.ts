@@ -1,6 +1,7 @@
-import { EngineError } from './engine-error.js';
+
 import type { PieceSet } from './piece-set.js';
 import { formulaUses, type StripLetter } from './weight-formula.js';
+import { CodedError } from '../errors/index.js';
 
 /** Which exact ring a piece set's values live in, and the letter of its strip variables. */
 export interface ValueRing {
@@ -28,12 +29,7 @@ export function valueRing(set: PieceSet): ValueRing {
       divides ||= uses.divides;
     }
     if (letters.size > 1) {
-      throw new EngineError(
-        'invalid_piece_set',
-        `Strip variables: expected one letter, y or t, in the whole piece set, received both (piece '${p.name}')`,
-        'pieces',
-        't_m stands for e^{y_m}: write every weight of one set in the same letter',
-      );
+      throw new CodedError('invalid_piece_set', { what: 'Strip variables', expected: 'one letter, y or t, in the whole piece set', received: `both (piece '${p.name}')` }, { path: 'pieces', hint: 't_m stands for e^{y_m}: write every weight of one set in the same letter' });
     }
   }
   const letter: StripLetter = letters.has('t') ? 't' : 'y';

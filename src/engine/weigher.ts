@@ -1,9 +1,10 @@
 import type { UnitTriangle } from './lattice.js';
 import type { Piece } from './piece-set.js';
-import { EngineError } from './engine-error.js';
+
 import type { Semiring } from './semiring.js';
 import { evaluateFormula, type FormulaRing } from './weight-formula.js';
 import { generatingSemiring, type Generating } from './semirings/statistic-semiring.js';
+import { CodedError } from '../errors/index.js';
 
 /** The weight of one piece placed on one unit triangle. */
 export type Weigher<T> = (piece: Piece, triangle: UnitTriangle) => T;
@@ -38,12 +39,12 @@ export function formulaRing<T>(semiring: Semiring<T>): FormulaRing<T> {
     fromInteger: (n) => semiring.fromInteger(n),
     variable: (name) => semiring.variable(name),
     strip: (letter, index) => {
-      if (!semiring.strip) throw new EngineError('invalid_weight_formula', `Weight formula: expected a value ring with strip variables, received the ${semiring.name} ring`, 'weight.formula');
+      if (!semiring.strip) throw new CodedError('invalid_weight_formula', { what: 'Weight formula', expected: 'a value ring with strip variables', received: `the ${semiring.name} ring` }, { path: 'weight.formula' });
       return semiring.strip(letter, index);
     },
     divide: (a, b) => {
       if (!semiring.divide) {
-        throw new EngineError('invalid_weight_formula', `Weight formula: expected a value ring that divides, received the ${semiring.name} ring`, 'weight.formula', 'count with exact fractions or modular values');
+        throw new CodedError('invalid_weight_formula', { what: 'Weight formula', expected: 'a value ring that divides', received: `the ${semiring.name} ring` }, { path: 'weight.formula', hint: 'count with exact fractions or modular values' });
       }
       return semiring.divide(a, b);
     },

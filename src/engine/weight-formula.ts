@@ -1,4 +1,4 @@
-import { EngineError } from './engine-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** A strip variable: y or t of the piece's rising strip (i) or falling strip (j). */
 export type StripLetter = 'y' | 't';
@@ -17,7 +17,7 @@ type Token = { kind: 'number' | 'name' | 'op'; text: string; at: number };
 const MAX_EXPONENT = 64;
 
 function fail(text: string, at: number, what: string, hint?: string): never {
-  throw new EngineError('invalid_weight_formula', `Weight formula: expected ${what}, received ${at >= text.length ? 'the end' : `'${text.slice(at, at + 8)}'`} at character ${at + 1} of '${text}'`, 'weight.formula', hint);
+  throw new CodedError('invalid_weight_formula', { what: 'Weight formula', expected: `${what}`, received: `${at >= text.length ? 'the end' : `'${text.slice(at, at + 8)}'`} at character ${at + 1} of '${text}'` }, { path: 'weight.formula', hint: hint });
 }
 
 function tokenize(text: string): Token[] {

@@ -1,5 +1,5 @@
 import { countCompletions, fractionSemiring, integerSemiring, polynomialSemiring, triangleRegion, valueRing, type PieceSet } from '../engine/index.js';
-import { toAppError } from '../errors.js';
+import { toCodedError } from '../errors/index.js';
 import { hasIntegerWeights } from '../claims/resolve-theory.js';
 import type { RegionValue } from '../claims/count-region.js';
 
@@ -42,7 +42,7 @@ export function expandProduct(pieces: PieceSet, lambda: string, mu: string): Pro
       }
     }
   } catch (e) {
-    throw toAppError(e, '--triangle');
+    throw toCodedError(e).relocated({ path: 'triangle' }); // the field; the CLI names its flag
   }
   terms.sort((a, b) => (a.nu < b.nu ? -1 : a.nu > b.nu ? 1 : 0));
   return { theory: pieces.name, lambda, mu, products: terms };

@@ -1,4 +1,4 @@
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 
 /** A Grassmannian Gr(k, n): k-planes in n-space; its Schubert classes are 0/1 strings of length n with k ones. */
 export interface Grassmannian {
@@ -25,7 +25,7 @@ export function stringOfPartition(parts: readonly number[], g: Grassmannian, whe
   const width = g.n - g.k;
   const box = `the ${g.k} × ${width} box of Gr(${g.k},${g.n})`;
   if (parts.length > g.k || parts.some((p) => p > width)) {
-    throw new AppError('invalid_argument', `Partition: expected at most ${g.k} parts, each at most ${width} (${box}), received ${partitionText(parts)}`, {
+    throw new CodedError('invalid_argument', { what: 'Partition', expected: `at most ${g.k} parts, each at most ${width} (${box})`, received: `${partitionText(parts)}` }, {
       path: where,
       hint: 'a larger Grassmannian fits it: raise n (and k for more parts)',
     });
@@ -49,7 +49,7 @@ export function parsePartition(text: string, where = '--partitions'): number[] {
   if (t === '' || t === '-' || t === '0' || t === '∅') return [];
   const ok = t.includes('.') ? /^\d+(\.\d+)*\.?$/.test(t) : /^\d+$/.test(t);
   if (!ok) {
-    throw new AppError('invalid_argument', `Partition: expected digits such as 321, or parts joined by '.' such as 12.3.1, received '${text}'`, {
+    throw new CodedError('invalid_argument', { what: 'Partition', expected: `digits such as 321, or parts joined by '.' such as 12.3.1`, received: `'${text}'` }, {
       path: where,
       hint: "write the empty partition as 0 or '-'",
     });
@@ -57,7 +57,7 @@ export function parsePartition(text: string, where = '--partitions'): number[] {
   const parts = (t.includes('.') ? t.split('.').filter((x) => x !== '') : [...t]).map(Number);
   for (let i = 1; i < parts.length; i++) {
     if (parts[i]! > parts[i - 1]!) {
-      throw new AppError('invalid_argument', `Partition: expected weakly decreasing parts, received '${text}' (${parts.join(', ')})`, {
+      throw new CodedError('invalid_argument', { what: 'Partition', expected: 'weakly decreasing parts', received: `'${text}' (${parts.join(', ')})` }, {
         path: where,
         ...(t.includes('.') ? {} : { hint: "a part of 10 or more needs '.' between parts, e.g. 12.3.1" }),
       });
@@ -81,7 +81,7 @@ export function parseGrassmannian(text: string, where = '--grassmannian'): Grass
   const k = m ? Number(m[1]) : NaN;
   const n = m ? Number(m[2]) : NaN;
   if (!m || k > n || n < 1) {
-    throw new AppError('invalid_argument', `Grassmannian: expected k,n with 0 ≤ k ≤ n and n ≥ 1, received '${text}'`, { path: where, hint: 'e.g. --grassmannian 3,7 for Gr(3,7)' });
+    throw new CodedError('invalid_argument', { what: 'Grassmannian', expected: 'k,n with 0 ≤ k ≤ n and n ≥ 1', received: `'${text}'` }, { path: where, hint: 'e.g. --grassmannian 3,7 for Gr(3,7)' });
   }
   return { k, n };
 }

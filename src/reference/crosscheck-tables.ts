@@ -5,7 +5,7 @@ import { localizationTable } from './localization.js';
 import { lrTable } from './lr-rule.js';
 import { schwartzMacPhersonAtZero } from './ssm-at-zero.js';
 import { toTerms, type PolynomialTerm } from './ref-polynomial.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** The four theories the reference tables cover. */
 export type ReferenceTheory = 'cohomology' | 'equivariant' | 'k-theory' | 'dual-k-theory' | 'ssm-nonequivariant';
@@ -27,7 +27,7 @@ function integerValue(c: bigint, n: number): ReferenceValue {
  */
 export function referenceTable(theory: ReferenceTheory, k: number, n: number): Map<string, ReferenceValue> {
   if (!THEORIES.includes(theory)) {
-    throw new ReferenceComputationError('invalid_argument', `Theory: expected one of ${THEORIES.join(', ')}, received ${String(theory)}`);
+    throw new CodedError('invalid_argument', { what: 'Theory', expected: `one of ${THEORIES.join(', ')}`, received: `${String(theory)}` });
   }
   checkGrassmannian(k, n);
   const out = new Map<string, ReferenceValue>();

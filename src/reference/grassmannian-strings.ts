@@ -1,27 +1,27 @@
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** Throws unless k and n are integers with 0 ≤ k ≤ n. */
 export function checkGrassmannian(k: number, n: number): void {
   if (!Number.isInteger(n) || n < 0) {
-    throw new ReferenceComputationError('invalid_argument', `Grassmannian n: expected a non-negative integer, received ${n}`);
+    throw new CodedError('invalid_argument', { what: 'Grassmannian n', expected: 'a non-negative integer', received: `${n}` });
   }
   if (!Number.isInteger(k) || k < 0 || k > n) {
-    throw new ReferenceComputationError('invalid_argument', `Grassmannian k: expected an integer in [0, ${n}], received ${k}`);
+    throw new CodedError('invalid_argument', { what: 'Grassmannian k', expected: `an integer in [0, ${n}]`, received: `${k}` });
   }
 }
 
 /** Throws unless `s` is a 0/1 string (of length n with k ones when those are given). */
 export function checkString(s: string, k?: number, n?: number): void {
   if (!/^[01]*$/.test(s)) {
-    throw new ReferenceComputationError('invalid_string', `Schubert string: expected only 0s and 1s, received "${s}"`);
+    throw new CodedError('invalid_string', { what: 'Schubert string', expected: 'only 0s and 1s', received: `"${s}"` });
   }
   if (n !== undefined && s.length !== n) {
-    throw new ReferenceComputationError('invalid_string', `Schubert string length: expected ${n}, received ${s.length} ("${s}")`);
+    throw new CodedError('invalid_string', { what: 'Schubert string length', expected: `${n}`, received: `${s.length} ("${s}")` });
   }
   if (k !== undefined) {
     const ones = countOnes(s);
     if (ones !== k) {
-      throw new ReferenceComputationError('invalid_string', `Schubert string ones: expected ${k}, received ${ones} ("${s}")`);
+      throw new CodedError('invalid_string', { what: 'Schubert string ones', expected: `${k}`, received: `${ones} ("${s}")` });
     }
   }
 }
@@ -61,7 +61,7 @@ export function stringToPartition(s: string): number[] {
 export function partitionToString(p: readonly number[], k: number, n: number): string {
   checkGrassmannian(k, n);
   if (p.length > k) {
-    throw new ReferenceComputationError('invalid_argument', `Partition length: expected at most ${k} parts, received ${p.length}`);
+    throw new CodedError('invalid_argument', { what: 'Partition length', expected: `at most ${k} parts`, received: `${p.length}` });
   }
   const parts = [...p];
   while (parts.length < k) parts.push(0);
@@ -69,10 +69,7 @@ export function partitionToString(p: readonly number[], k: number, n: number): s
     const v = parts[i]!;
     const prev = i === 0 ? n - k : parts[i - 1]!;
     if (!Number.isInteger(v) || v < 0 || v > prev) {
-      throw new ReferenceComputationError(
-        'invalid_argument',
-        `Partition part ${i + 1}: expected an integer in [0, ${prev}], received ${v}`,
-      );
+      throw new CodedError('invalid_argument', { what: `Partition part ${i + 1}`, expected: `an integer in [0, ${prev}]`, received: `${v}` });
     }
   }
   const chars: string[] = new Array<string>(n).fill('0');

@@ -1,5 +1,5 @@
 import { checkGrassmannian, conjugateString, grassmannianStrings, partitionToString, stringToPartition } from './grassmannian-strings.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 // A truncated polynomial in L variables: monomial x^e is encoded as Σ e_i·B^(L−1−i) with a base B larger than
 // every exponent that survives truncation, so numeric order of keys is lexicographic order of exponents.
@@ -109,10 +109,10 @@ export function grothendieckProduct(
   maxDegree: number,
 ): Map<string, bigint> {
   if (!Number.isInteger(vars) || vars < 1) {
-    throw new ReferenceComputationError('invalid_argument', `Variable count: expected a positive integer, received ${vars}`);
+    throw new CodedError('invalid_argument', { what: 'Variable count', expected: 'a positive integer', received: `${vars}` });
   }
   if (!Number.isInteger(maxDegree) || maxDegree < 0) {
-    throw new ReferenceComputationError('invalid_argument', `Maximum degree: expected a non-negative integer, received ${maxDegree}`);
+    throw new CodedError('invalid_argument', { what: 'Maximum degree', expected: 'a non-negative integer', received: `${maxDegree}` });
   }
   const enc: Encoding = { vars, base: maxDegree + 1, maxDegree };
   const cache = new Map<string, TruncatedPoly>();
@@ -148,7 +148,7 @@ function expand(
     }
     const nu = decode(bestKey, enc);
     if (nu.some((v, i) => i > 0 && v > nu[i - 1]!)) {
-      throw new ReferenceComputationError('invalid_argument', `Leading exponent: expected a partition, received (${nu.join(',')})`);
+      throw new CodedError('invalid_argument', { what: 'Leading exponent', expected: 'a partition', received: `(${nu.join(',')})` });
     }
     const c = rem.get(bestKey)!;
     const name = nu.filter((v) => v > 0).join(',');

@@ -1,15 +1,12 @@
 import { checkGrassmannian, grassmannianStrings, partitionToString, stringToPartition } from './grassmannian-strings.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** Throws unless p is a weakly decreasing list of non-negative integers. */
 export function checkPartition(p: readonly number[], what = 'Partition'): void {
   p.forEach((v, i) => {
     const prev = i === 0 ? Infinity : p[i - 1]!;
     if (!Number.isInteger(v) || v < 0 || v > prev) {
-      throw new ReferenceComputationError(
-        'invalid_argument',
-        `${what} part ${i + 1}: expected an integer in [0, ${prev}], received ${v}`,
-      );
+      throw new CodedError('invalid_argument', { what: `${what} part ${i + 1}`, expected: `an integer in [0, ${prev}]`, received: `${v}` });
     }
   });
 }

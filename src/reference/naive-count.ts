@@ -1,11 +1,11 @@
 import { evaluateFormulaText, rational, rationalAdd, rationalMul, type RefRational } from './naive-formula.js';
 import { RefPolynomial } from './ref-polynomial.js';
+import { CodedError } from '../errors/index.js';
 
 // Named parameters of a formula: every name that is not a strip variable.
 function formulaParameters(text: string): string[] {
   return (text.match(/[A-Za-z][A-Za-z0-9_]*/g) ?? []).filter((n) => !/^[yt]_?[ij]$/.test(n));
 }
-import { ReferenceComputationError } from './reference-error.js';
 
 /** Weight of a piece: an integer, a named variable, or the position weight y_j − y_i of its place. */
 export type NaivePieceWeight =
@@ -43,21 +43,18 @@ function triangleEdgeKeys(up: boolean, x: number, y: number): [string, string, s
 
 function checkInput(sides: readonly number[], boundary: readonly string[]): void {
   if (sides.length !== 6 || sides.some((s) => !Number.isInteger(s) || s < 0)) {
-    throw new ReferenceComputationError('invalid_region', `Side lengths: expected six non-negative integers, received [${sides.join(', ')}]`);
+    throw new CodedError('invalid_region', { what: 'Side lengths', expected: 'six non-negative integers', received: `[${sides.join(', ')}]` });
   }
   const [s1, s2, s3, s4, s5, s6] = sides as [number, number, number, number, number, number];
   if (s1 + s2 !== s4 + s5 || s2 + s3 !== s5 + s6) {
-    throw new ReferenceComputationError(
-      'invalid_region',
-      `Hexagon closure: expected s1+s2 = s4+s5 and s2+s3 = s5+s6, received [${sides.join(', ')}]`,
-    );
+    throw new CodedError('invalid_region', { what: 'Hexagon closure', expected: 's1+s2 = s4+s5 and s2+s3 = s5+s6', received: `[${sides.join(', ')}]` });
   }
   if (boundary.length !== 6) {
-    throw new ReferenceComputationError('invalid_boundary', `Boundary: expected six strings, received ${boundary.length}`);
+    throw new CodedError('invalid_boundary', { what: 'Boundary', expected: 'six strings', received: `${boundary.length}` });
   }
   boundary.forEach((b, i) => {
     if (b.length !== sides[i]) {
-      throw new ReferenceComputationError('invalid_boundary', `Boundary side ${i + 1} length: expected ${sides[i]}, received ${b.length}`);
+      throw new CodedError('invalid_boundary', { what: `Boundary side ${i + 1} length`, expected: `${sides[i]}`, received: `${b.length}` });
     }
   });
 }
@@ -80,10 +77,10 @@ function boundaryEdges(sides: readonly number[]): string[][] {
 function checkPieces(pieces: readonly NaivePiece[]): void {
   pieces.forEach((p, i) => {
     if (p.orientation !== 'up' && p.orientation !== 'down') {
-      throw new ReferenceComputationError('invalid_piece', `Piece ${i} orientation: expected 'up' or 'down', received ${String(p.orientation)}`);
+      throw new CodedError('invalid_piece', { what: `Piece ${i} orientation`, expected: `'up' or 'down'`, received: `${String(p.orientation)}` });
     }
     if (!Array.isArray(p.labels) || p.labels.length !== 3 || p.labels.some((l) => typeof l !== 'string' || l === '')) {
-      throw new ReferenceComputationError('invalid_piece', `Piece ${i} labels: expected three nonempty strings, received ${JSON.stringify(p.labels)}`);
+      throw new CodedError('invalid_piece', { what: `Piece ${i} labels`, expected: 'three nonempty strings', received: `${JSON.stringify(p.labels)}` });
     }
     const w = p.weight;
     const ok =
@@ -91,7 +88,7 @@ function checkPieces(pieces: readonly NaivePiece[]): void {
       (w.type === 'variable' && typeof w.name === 'string' && w.name !== '') ||
       (w.type === 'formula' && typeof w.text === 'string') ||
       w.type === 'position';
-    if (!ok) throw new ReferenceComputationError('invalid_piece', `Piece ${i} weight: expected integer, variable or position, received ${JSON.stringify(w)}`);
+    if (!ok) throw new CodedError('invalid_piece', { what: `Piece ${i} weight`, expected: 'integer, variable or position', received: `${JSON.stringify(w)}` });
   });
 }
 

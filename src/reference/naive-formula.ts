@@ -1,5 +1,5 @@
 import { RefPolynomial } from './ref-polynomial.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** A quotient of two polynomials (no normal form: compare with `rationalEquals`). */
 export interface RefRational {
@@ -19,7 +19,7 @@ export function rationalMul(a: RefRational, b: RefRational): RefRational {
 }
 
 export function rationalDiv(a: RefRational, b: RefRational): RefRational {
-  if (b.num.isZero()) throw new ReferenceComputationError('invalid_argument', 'Formula quotient: expected a nonzero denominator, received 0');
+  if (b.num.isZero()) throw new CodedError('invalid_argument', { what: 'Formula quotient', expected: 'a nonzero denominator', received: '0' });
   return { num: a.num.mul(b.den), den: a.den.mul(b.num) };
 }
 
@@ -36,7 +36,7 @@ export function evaluateFormulaText(text: string, strips: { i: number; j: number
   const src = text.replace(/\s+/g, '');
   let p = 0;
   const bad = (): never => {
-    throw new ReferenceComputationError('invalid_piece', `Weight formula: expected a well-formed formula, received '${text}' (at ${p + 1})`);
+    throw new CodedError('invalid_piece', { what: 'Weight formula', expected: 'a well-formed formula', received: `'${text}' (at ${p + 1})` });
   };
   const expr = (): RefRational => {
     let acc = term();

@@ -1,5 +1,5 @@
 import { checkGrassmannian, checkString, partitionToString, stringToPartition } from './grassmannian-strings.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** The string of the one-row class σ_(p) in Gr(k, n). */
 export function rowClass(p: number, k: number, n: number): string {
@@ -13,7 +13,7 @@ export function columnClass(p: number, k: number, n: number): string {
 
 function checkStripSize(p: number, max: number, what: string): void {
   if (!Number.isInteger(p) || p < 0 || p > max) {
-    throw new ReferenceComputationError('invalid_argument', `${what}: expected an integer in [0, ${max}], received ${p}`);
+    throw new CodedError('invalid_argument', { what: `${what}`, expected: `an integer in [0, ${max}]`, received: `${p}` });
   }
 }
 

@@ -1,5 +1,5 @@
 import { RefPolynomial } from './ref-polynomial.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** A denominator factor 1 + y_j − y_i, keyed `${j},${i}` with 1-based positions. */
 export type ChernFactorKey = string;
@@ -163,7 +163,7 @@ export class RefFraction {
   /** The homogeneous part of degree d of the power series in y (1/(1+χ) = Σ (−χ)^m). */
   seriesPart(d: number): RefPolynomial {
     if (d < 0) {
-      throw new ReferenceComputationError('invalid_argument', `Series degree: expected a non-negative integer, received ${d}`);
+      throw new CodedError('invalid_argument', { what: 'Series degree', expected: 'a non-negative integer', received: `${d}` });
     }
     let acc = truncate(this.numerator, d);
     for (const [key, e] of this.denominator) {

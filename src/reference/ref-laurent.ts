@@ -1,5 +1,5 @@
 import { RefPolynomial } from './ref-polynomial.js';
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** One term of a Laurent polynomial: exponents may be negative. */
 export interface LaurentTerm {
@@ -99,7 +99,7 @@ export class RefLaurent {
   /** Exact quotient; throws `inexact_division` when the divisor does not divide. */
   divExact(divisor: RefLaurent): RefLaurent {
     if (divisor.isZero()) {
-      throw new ReferenceComputationError('inexact_division', 'Laurent divisor: expected a nonzero Laurent polynomial, received 0');
+      throw new CodedError('inexact_division', { what: 'Laurent divisor', expected: 'a nonzero Laurent polynomial', received: '0' });
     }
     if (this.isZero()) return this;
     const len = Math.max(this.shift.length, divisor.shift.length);
@@ -147,7 +147,7 @@ export class RefLaurent {
   toTerms(nvars: number): LaurentTerm[] {
     const used = Math.max(this.shift.length, this.poly.variableCount());
     if (used > nvars) {
-      throw new ReferenceComputationError('invalid_argument', `Variable count: expected at least ${used}, received ${nvars}`);
+      throw new CodedError('invalid_argument', { what: 'Variable count', expected: `at least ${used}`, received: `${nvars}` });
     }
     const out = this.poly.rawTerms().map((t) => ({
       coefficient: t.coeff,

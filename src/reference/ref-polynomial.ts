@@ -1,4 +1,4 @@
-import { ReferenceComputationError } from './reference-error.js';
+import { CodedError } from '../errors/index.js';
 
 /** One term of a polynomial: an integer coefficient times y^exponents (variable i has index i). */
 export interface PolynomialTerm {
@@ -53,7 +53,7 @@ export class RefPolynomial {
   /** The variable with index i (y_{i+1} in the Schubert-calculus convention). */
   static variable(i: number): RefPolynomial {
     if (!Number.isInteger(i) || i < 0) {
-      throw new ReferenceComputationError('invalid_argument', `Variable index: expected a non-negative integer, received ${i}`);
+      throw new CodedError('invalid_argument', { what: 'Variable index', expected: 'a non-negative integer', received: `${i}` });
     }
     const exps = new Array<number>(i + 1).fill(0);
     exps[i] = 1;
@@ -64,7 +64,7 @@ export class RefPolynomial {
   static monomial(c: bigint, exps: readonly number[]): RefPolynomial {
     for (const e of exps) {
       if (!Number.isInteger(e) || e < 0 || e > 0xffff) {
-        throw new ReferenceComputationError('invalid_argument', `Exponent: expected an integer in [0, 65535], received ${e}`);
+        throw new CodedError('invalid_argument', { what: 'Exponent', expected: 'an integer in [0, 65535]', received: `${e}` });
       }
     }
     const m = new Map<string, Monomial>();
@@ -135,7 +135,7 @@ export class RefPolynomial {
   /** Exact quotient this / divisor; throws `inexact_division` when the divisor does not divide. */
   divExact(divisor: RefPolynomial): RefPolynomial {
     if (divisor.isZero()) {
-      throw new ReferenceComputationError('inexact_division', 'Polynomial divisor: expected a nonzero polynomial, received 0');
+      throw new CodedError('inexact_division', { what: 'Polynomial divisor', expected: 'a nonzero polynomial', received: '0' });
     }
     // Lex order is a monomial order, so if d | r then LT(d) | LT(r); peeling leading terms must end at 0.
     const lead = divisor.leadingTerm();
@@ -148,10 +148,7 @@ export class RefPolynomial {
       const exps: number[] = [];
       for (let i = 0; i < len; i++) exps.push((r.exps[i] ?? 0) - (lead.exps[i] ?? 0));
       if (exps.some((e) => e < 0) || r.coeff % lead.coeff !== 0n) {
-        throw new ReferenceComputationError(
-          'inexact_division',
-          `Polynomial division: expected a divisor of the dividend, received a remainder with leading term ${r.coeff}·y^[${r.exps.join(',')}]`,
-        );
+        throw new CodedError('inexact_division', { what: 'Polynomial division', expected: 'a divisor of the dividend', received: `a remainder with leading term ${r.coeff}·y^[${r.exps.join(',')}]` });
       }
       const qc = r.coeff / lead.coeff;
       const qexps = trim(exps);
@@ -254,7 +251,7 @@ export class RefPolynomial {
 function leadingOf(terms: Iterable<Monomial>): Monomial {
   let best: Monomial | undefined;
   for (const t of terms) if (best === undefined || lexCompare(t.exps, best.exps) > 0) best = t;
-  if (best === undefined) throw new ReferenceComputationError('invalid_argument', 'Leading term: expected a nonzero polynomial, received 0');
+  if (best === undefined) throw new CodedError('invalid_argument', { what: 'Leading term', expected: 'a nonzero polynomial', received: '0' });
   return best;
 }
 
@@ -270,11 +267,11 @@ function addInto(acc: Map<string, Monomial>, other: ReadonlyMap<string, Monomial
 /** Terms of p with exponent vectors of length nvars, zero terms removed, sorted lexicographically ascending by exponent vector. */
 export function toTerms(p: RefPolynomial, nvars: number): PolynomialTerm[] {
   if (!Number.isInteger(nvars) || nvars < 0) {
-    throw new ReferenceComputationError('invalid_argument', `Variable count: expected a non-negative integer, received ${nvars}`);
+    throw new CodedError('invalid_argument', { what: 'Variable count', expected: 'a non-negative integer', received: `${nvars}` });
   }
   const used = p.variableCount();
   if (used > nvars) {
-    throw new ReferenceComputationError('invalid_argument', `Variable count: expected at least ${used}, received ${nvars}`);
+    throw new CodedError('invalid_argument', { what: 'Variable count', expected: `at least ${used}`, received: `${nvars}` });
   }
   const out = p.rawTerms().map((t) => {
     const exponents = new Array<number>(nvars).fill(0);

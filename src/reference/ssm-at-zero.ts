@@ -1,7 +1,8 @@
 import { grassmannianStrings } from './grassmannian-strings.js';
-import { ReferenceComputationError } from './reference-error.js';
+
 import type { RefPolynomial } from './ref-polynomial.js';
 import { cellFactors, csmRestrictionTable, tangentFactors, type SchwartzMacPherson } from './ssm-localization.js';
+import { CodedError } from '../errors/index.js';
 
 // A power series in one variable s, truncated: coefficients of s^0 … s^{P−1}.
 type Series = bigint[];
@@ -91,10 +92,10 @@ export function schwartzMacPhersonAtZero(kind: SchwartzMacPherson, k: number, n:
         }
         // Exact division by K·s^shift: the lower coefficients must vanish and the rest be multiples of K.
         for (let m = 0; m < d.shift; m++) {
-          if (rem[m] !== 0n) throw new ReferenceComputationError('inexact_division', `Series division at ${w}: expected a multiple of s^${d.shift}, received a term s^${m}`);
+          if (rem[m] !== 0n) throw new CodedError('inexact_division', { what: `Series division at ${w}`, expected: `a multiple of s^${d.shift}`, received: `a term s^${m}` });
         }
         const shifted = rem.slice(d.shift).map((x) => {
-          if (x % d.scale !== 0n) throw new ReferenceComputationError('inexact_division', `Series division at ${w}: expected multiples of ${d.scale}, received ${x}`);
+          if (x % d.scale !== 0n) throw new CodedError('inexact_division', { what: `Series division at ${w}`, expected: `multiples of ${d.scale}`, received: `${x}` });
           return x / d.scale;
         });
         while (shifted.length < P) shifted.push(0n); // beyond the precision: never read (see above)

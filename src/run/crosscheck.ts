@@ -14,7 +14,7 @@ import {
   type PieceSet,
   type Term,
 } from '../engine/index.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { grassmannianStrings } from '../reference/grassmannian-strings.js';
 import { isLocalizationTheory, localizationLetter, localizationValues, type LocalizationTheory } from './localization-values.js';
 import { referenceTable, type ReferenceTheory } from '../reference/crosscheck-tables.js';
@@ -96,7 +96,7 @@ export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
   const theory = options.theory;
   if (isLocalizationTheory(theory)) {
     if (!options.pieces) {
-      throw new AppError('invalid_argument', `--pieces: expected a piece-set file to check against ${theory}, received none`, {
+      throw new CodedError('invalid_argument', { what: '--pieces', expected: `a piece-set file to check against ${theory}`, received: 'none' }, {
         path: '--pieces',
         hint: `no puzzle rule for ${theory} is built in; the reference is localization`,
       });

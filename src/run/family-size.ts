@@ -1,6 +1,6 @@
 import type { ClaimProgram } from '../claims/index.js';
 import type { ClaimPlan } from '../claims/claim-api.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 
 /** Classes (variable assignments) a run may have; beyond this the class list alone is too big to plan. */
 export const MAX_CLASSES = 100_000;
@@ -32,7 +32,7 @@ export function checkFamilyBounds(program: ClaimProgram, max: Readonly<Record<st
   const names = program.variables.map((v) => v.name);
   for (const name of Object.keys(max)) {
     if (!names.includes(name)) {
-      throw new AppError('invalid_argument', `Variable bound: expected one of ${names.map((n) => `'${n}'`).join(' | ') || 'no variables'}, received '${name}'`, {
+      throw new CodedError('invalid_argument', { what: 'Variable bound', expected: `one of ${names.map((n) => `'${n}'`).join(' | ') || 'no variables'}`, received: `'${name}'` }, {
         path: '--max',
         hint: names.length ? `the claim's variables are ${names.join(', ')}` : 'this claim has no variables to raise',
       });
@@ -40,11 +40,11 @@ export function checkFamilyBounds(program: ClaimProgram, max: Readonly<Record<st
   }
   const ranges = program.variables.map((v) => ({ name: v.name, min: v.min, max: max[v.name] ?? v.max }));
   const bad = ranges.find((r) => r.max < r.min);
-  if (bad) throw new AppError('invalid_argument', `Variable bound: expected ${bad.name} ≥ ${bad.min} (its minimum), received ${bad.max}`, { path: '--max' });
+  if (bad) throw new CodedError('invalid_argument', { what: 'Variable bound', expected: `${bad.name} ≥ ${bad.min} (its minimum)`, received: `${bad.max}` }, { path: '--max' });
   const classes = ranges.reduce((acc, r) => acc * (r.max - r.min + 1), 1);
   const where = ranges.filter((r) => max[r.name] !== undefined).length ? '--max' : 'family.variables';
   if (classes > MAX_CLASSES) {
-    throw new AppError('family_too_large', `Family size: expected at most ${fmt(MAX_CLASSES)} classes, received ${fmt(classes)} (${ranges.map((r) => `${r.name} from ${r.min} to ${r.max}`).join(', ')})`, {
+    throw new CodedError('family_too_large', { what: 'Family size', expected: `at most ${fmt(MAX_CLASSES)} classes`, received: `${fmt(classes)} (${ranges.map((r) => `${r.name} from ${r.min} to ${r.max}`).join(', ')})` }, {
       path: where,
       hint: 'lower the bound (e.g. --max with a smaller value); a sweep grows by a factor of 4 to 16 per size step',
     });
@@ -58,7 +58,7 @@ export function checkFamilyBounds(program: ClaimProgram, max: Readonly<Record<st
   }
   const side = triangleSide(program, corner);
   if (side > MAX_TRIANGLE_SIDE) {
-    throw new AppError('family_too_large', `Region size: expected a completed triangle of side at most ${fmt(MAX_TRIANGLE_SIDE)}, received ${fmt(side)} (at ${ranges.map((r) => `${r.name}=${corner[r.name]}`).join(', ')})`, {
+    throw new CodedError('family_too_large', { what: 'Region size', expected: `a completed triangle of side at most ${fmt(MAX_TRIANGLE_SIDE)}`, received: `${fmt(side)} (at ${ranges.map((r) => `${r.name}=${corner[r.name]}`).join(', ')})` }, {
       path: where,
       hint: 'lower the bound; every boundary of such a region has far too many labelings to sweep',
     });
@@ -70,7 +70,7 @@ export function checkInstanceCount(plan: ClaimPlan, max: Readonly<Record<string,
   let total = 0n;
   for (const cls of plan.classes(max)) total += plan.instanceCount(cls);
   if (total > MAX_INSTANCES) {
-    throw new AppError('family_too_large', `Family size: expected at most ${fmt(MAX_INSTANCES)} instances, received ${fmt(total)}`, {
+    throw new CodedError('family_too_large', { what: 'Family size', expected: `at most ${fmt(MAX_INSTANCES)} instances`, received: `${fmt(total)}` }, {
       path: Object.keys(max).length ? '--max' : 'family.variables',
       hint: 'lower a bound; run smaller bounds first, then raise them with --max (finished classes are kept)',
     });
@@ -87,7 +87,7 @@ export function checkClassKey(program: ClaimProgram, key: string): void {
   }
   const side = triangleSide(program, values);
   if (side > MAX_TRIANGLE_SIDE) {
-    throw new AppError('family_too_large', `Region size: expected a completed triangle of side at most ${fmt(MAX_TRIANGLE_SIDE)}, received ${fmt(side)} (class ${key})`, {
+    throw new CodedError('family_too_large', { what: 'Region size', expected: `a completed triangle of side at most ${fmt(MAX_TRIANGLE_SIDE)}`, received: `${fmt(side)} (class ${key})` }, {
       path: '--instance',
       hint: 'copy a class key that a run printed',
     });

@@ -1,5 +1,5 @@
 import { divideFraction, fractionOf, type Fraction, type Polynomial, type StripLetter } from '../engine/index.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import type { Product } from '../products/expand-product.js';
 import { kLocalizationTable } from '../reference/k-localization.js';
 import type { RefFraction } from '../reference/ref-fraction.js';
@@ -68,7 +68,7 @@ export function localizationValue(theory: LocalizationTheory, lambda: string, mu
   const ones = (s: string) => [...s].filter((c) => c === '1').length;
   const n = lambda.length;
   if (mu.length !== n || nu.length !== n || ones(mu) !== ones(lambda) || ones(nu) !== ones(lambda) || !/^[01]+$/.test(lambda + mu + nu)) {
-    throw new AppError('invalid_argument', `--triangle: expected three 0/1 strings of one Gr(k, n), received ${lambda},${mu},${nu}`, { path: '--triangle' });
+    throw new CodedError('invalid_argument', { what: '--triangle', expected: 'three 0/1 strings of one Gr(k, n)', received: `${lambda},${mu},${nu}` }, { path: '--triangle' });
   }
   return localizationValues(theory, ones(lambda), n, [lambda, mu]).get(`${lambda},${mu},${nu}`) ?? fractionOf(new Map());
 }
@@ -78,7 +78,7 @@ export function localizationProduct(theory: LocalizationTheory, lambda: string, 
   const ones = (s: string) => [...s].filter((c) => c === '1').length;
   const n = lambda.length;
   if (mu.length !== n || ones(mu) !== ones(lambda) || !/^[01]+$/.test(lambda + mu)) {
-    throw new AppError('invalid_argument', `--triangle: expected two 0/1 strings of one Gr(k, n), received ${lambda},${mu}`, { path: '--triangle' });
+    throw new CodedError('invalid_argument', { what: '--triangle', expected: 'two 0/1 strings of one Gr(k, n)', received: `${lambda},${mu}` }, { path: '--triangle' });
   }
   const prefix = `${lambda},${mu},`;
   const letter = localizationLetter(theory);

@@ -1,5 +1,5 @@
 import type { SizeClass } from '../claims/claim-api.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { counterexampleKeys, recordRecheck, type Store } from '../store/index.js';
 import { deserializeError } from './serialize-error.js';
 import type { WorkerPool } from './worker-pool.js';
@@ -52,7 +52,7 @@ export async function recheckCounterexamples(
       const what = `re-check of class ${classKey}`;
       const reply = await pool.run({ ...base, kind: 'confirm', classKey, indices, attempt: 0 }, what);
       if (!reply.ok) throw deserializeError(reply.error, what);
-      if (!('confirmed' in reply)) throw new AppError('internal_error', `Re-check: expected confirmed results, received another reply (${what})`);
+      if (!('confirmed' in reply)) throw new CodedError('internal_error', { what: 'Re-check', expected: 'confirmed results', received: `another reply (${what})` });
       db.transaction(() => {
         for (const r of reply.confirmed) {
           recordRecheck(db, base.fingerprint, classKey, r.index, runId, r.status);

@@ -1,6 +1,7 @@
 import { availableParallelism } from 'node:os';
 import { z } from 'zod';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
+import { hasSchemaMessage, issueExpected, parseMarked, schemaMessageParts } from '../claims/zod-issue.js';
 import { DEFAULT_STORE_PATH } from '../store/index.js';
 import { parseShard, type ShardSpec } from './shard-partition.js';
 
@@ -37,7 +38,7 @@ const kebab = (s: string) => s.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
 
 /** Validates run options; the error names the flag, e.g. `→ at --max-counterexamples`. */
 export function parseRunOptions(input: RunOptionsInput): RunOptions {
-  const parsed = RunOptions.safeParse(input);
+  const parsed = parseMarked(RunOptions, input);
   if (parsed.success) {
     const { shard, ...rest } = parsed.data;
     return shard === undefined ? rest : { ...rest, shard: parseShard(shard) };
@@ -46,9 +47,8 @@ export function parseRunOptions(input: RunOptionsInput): RunOptions {
   const flag = `--${kebab(String(issue.path[0] ?? 'options'))}`;
   let received: unknown = input;
   for (const p of issue.path) received = received && typeof received === 'object' ? (received as Record<PropertyKey, unknown>)[p as PropertyKey] : undefined;
-  const at = issue.message.indexOf('expected');
-  const expected = (at >= 0 ? issue.message.slice(at) : `expected ${issue.message}`).replace(/, received .*$/, '');
-  throw new AppError('invalid_argument', `${flag}: ${expected}, received ${JSON.stringify(received) ?? 'nothing'}`, {
+  const expected = hasSchemaMessage(issue) ? schemaMessageParts(issue.message, '').expected : issueExpected(issue);
+  throw new CodedError('invalid_argument', { what: flag, expected, received: JSON.stringify(received) ?? 'nothing' }, {
     path: flag,
     hint: 'see puzzlesweep run --help',
   });

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 
 /** Shard `index` of `count` (0 ≤ index < count), as given by `--shard index/count`. */
 export interface ShardSpec {
@@ -32,7 +32,7 @@ export function parseShard(text: string, flag = '--shard'): ShardSpec {
   const index = m ? Number(m[1]) : NaN;
   const count = m ? Number(m[2]) : NaN;
   if (!m || count < 1 || count > MAX_SHARDS || index >= count) {
-    throw new AppError('invalid_argument', `Shard: expected 'i/N' with 0 ≤ i < N ≤ ${MAX_SHARDS}, e.g. '0/4', received '${text}'`, {
+    throw new CodedError('invalid_argument', { what: 'Shard', expected: `'i/N' with 0 ≤ i < N ≤ ${MAX_SHARDS}, e.g. '0/4'`, received: `'${text}'` }, {
       path: flag,
       hint: 'shards are numbered from 0, like SLURM_ARRAY_TASK_ID in a job array --array=0-(N-1)',
     });

@@ -1,4 +1,4 @@
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { MAX_SHARDS } from './shard-partition.js';
 
 /** What the Slurm scripts of one sharded sweep need; every path absolute. */
@@ -32,7 +32,7 @@ export const sh = (s: string) => (/^[A-Za-z0-9_./:=@%+,-]+$/.test(s) ? s : `'${s
 export function slurmSeconds(time: string): number {
   const m = /^(?:(\d+)-)?(\d{1,2}):(\d{2}):(\d{2})$/.exec(time);
   if (!m || Number(m[3]) > 59 || Number(m[4]) > 59) {
-    throw new AppError('invalid_argument', `--time: expected HH:MM:SS or D-HH:MM:SS as Slurm takes it, received '${time}'`, { path: '--time' });
+    throw new CodedError('invalid_argument', { what: '--time', expected: 'HH:MM:SS or D-HH:MM:SS as Slurm takes it', received: `'${time}'` }, { path: '--time' });
   }
   return Number(m[1] ?? 0) * 86400 + Number(m[2]) * 3600 + Number(m[3]) * 60 + Number(m[4]);
 }
@@ -49,17 +49,17 @@ export function shardTimeLimit(seconds: number): number {
 /** Validates the scheduler options; errors name the flag. */
 export function checkSlurmInput(i: SlurmScriptInput): void {
   if (!Number.isInteger(i.shards) || i.shards < 1 || i.shards > MAX_SHARDS) {
-    throw new AppError('invalid_argument', `--shards: expected an integer from 1 to ${MAX_SHARDS}, received ${i.shards}`, { path: '--shards', hint: "Slurm caps job arrays at the cluster's MaxArraySize (often 1001)" });
+    throw new CodedError('invalid_argument', { what: '--shards', expected: `an integer from 1 to ${MAX_SHARDS}`, received: `${i.shards}` }, { path: '--shards', hint: "Slurm caps job arrays at the cluster's MaxArraySize (often 1001)" });
   }
   if (!Number.isInteger(i.cpusPerTask) || i.cpusPerTask < 1 || i.cpusPerTask > 1024) {
-    throw new AppError('invalid_argument', `--cpus-per-task: expected an integer from 1 to 1024, received ${i.cpusPerTask}`, { path: '--cpus-per-task' });
+    throw new CodedError('invalid_argument', { what: '--cpus-per-task', expected: 'an integer from 1 to 1024', received: `${i.cpusPerTask}` }, { path: '--cpus-per-task' });
   }
   if (i.partition !== undefined && !/^[A-Za-z0-9_.,-]+$/.test(i.partition)) {
-    throw new AppError('invalid_argument', `--partition: expected a Slurm partition name (letters, digits, _ . , -), received '${i.partition}'`, { path: '--partition' });
+    throw new CodedError('invalid_argument', { what: '--partition', expected: 'a Slurm partition name (letters, digits, _ . , -)', received: `'${i.partition}'` }, { path: '--partition' });
   }
   if (i.time !== undefined) slurmSeconds(i.time);
   if (/[\s%]/.test(i.dir)) {
-    throw new AppError('invalid_argument', `--out: expected a folder path without spaces or '%' (Slurm reads #SBATCH paths unquoted), received '${i.dir}'`, { path: '--out' });
+    throw new CodedError('invalid_argument', { what: '--out', expected: `a folder path without spaces or '%' (Slurm reads #SBATCH paths unquoted)`, received: `'${i.dir}'` }, { path: '--out' });
   }
 }
 

@@ -1,5 +1,5 @@
 import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
-import { AppError, toAppError } from '../errors.js';
+import { CodedError, toCodedError } from '../errors/index.js';
 import {
   ChunkLeaser,
   completeChunk,
@@ -115,7 +115,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
     const idleReopens = new Map<number, number>();
     // One listener for the whole sweep: a stop wakes the loop even while it only waits for a peer's lease.
     const aborted = ctx.signal && !ctx.signal.aborted ? new Promise<void>((resolve) => ctx.signal!.addEventListener('abort', () => resolve(), { once: true })) : undefined;
-    let fatal: AppError | undefined;
+    let fatal: CodedError | undefined;
 
     const dispatch = async (ci: number, lease: LeasedChunk): Promise<void> => {
       const classKey = classes[ci]!.key;
@@ -126,7 +126,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
         const reply = await ctx.pool.run(task, what);
         longestChunkMs = Math.max(longestChunkMs, Date.now() - startedAt);
         if (!reply.ok) throw deserializeError(reply.error, what);
-        if (!('chunk' in reply)) throw new AppError('internal_error', `Worker reply: expected chunk results, received another reply (${what})`);
+        if (!('chunk' in reply)) throw new CodedError('internal_error', { what: 'Worker reply', expected: 'chunk results', received: `another reply (${what})` });
         const r = reply.chunk;
         const added = completeChunk(db, { chunkId: lease.chunkId, runId, fingerprint: claim.fingerprint, classKey, ...r });
         if (added < 0) {
@@ -147,7 +147,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
       } catch (e) {
         releaseChunk(db, lease.chunkId);
         s.abandoned(ci);
-        fatal ??= toAppError(e);
+        fatal ??= toCodedError(e);
       }
     };
 
@@ -169,7 +169,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
           const outcome = settleClass({ db, fingerprint: claim.fingerprint, runId, method, cls: classes[ci]!, count: counts[ci]!, part: parts[ci]! });
           if (outcome === 'reopen') {
             const n = (idleReopens.get(ci) ?? 0) + 1;
-            if (n > MAX_IDLE_REOPENS) throw new AppError('internal_error', `Class ${classes[ci]!.key}: expected its unfinished part to be free or leased, received neither`);
+            if (n > MAX_IDLE_REOPENS) throw new CodedError('internal_error', { what: `Class ${classes[ci]!.key}`, expected: 'its unfinished part to be free or leased', received: 'neither' });
             idleReopens.set(ci, n);
             leaser(ci).reload();
           }
@@ -209,7 +209,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
   } catch (e) {
     sched?.halt('error');
     await Promise.allSettled([...inflight]);
-    const err = storeFault(e, options.db) ?? toAppError(e);
+    const err = storeFault(e, options.db) ?? toCodedError(e);
     try {
       finishRun(db, runId, 'failed', 'error', { code: err.code, message: err.message });
     } catch {

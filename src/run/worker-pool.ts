@@ -1,6 +1,6 @@
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Piscina } from 'piscina';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import type { WorkerReply, WorkerTask } from './worker-task.js';
 
 /** How often a task is tried before the run gives up with `worker_crashed`. */
@@ -35,7 +35,7 @@ export class WorkerPool {
         this.crashes++;
       }
     }
-    throw new AppError('worker_crashed', `Worker: expected ${what} to finish, received ${MAX_ATTEMPTS} crashed attempts (${(last as Error)?.message ?? String(last)})`, {
+    throw new CodedError('worker_crashed', { what: 'Worker', expected: `${what} to finish`, received: `${MAX_ATTEMPTS} crashed attempts (${(last as Error)?.message ?? String(last)})` }, {
       cause: last,
       hint: 'the chunk is left unfinished in the store; rerun the same command to resume, or try fewer --workers if memory is short',
     });

@@ -1,5 +1,6 @@
 import type { Measured } from '../claims/claim-api.js';
 import type { ChunkFindings } from '../store/index.js';
+import type { ErrorParts } from '../errors/index.js';
 
 interface TaskBase {
   /** File URL of a runtime module; the compiled claims runtime next to the worker when absent. */
@@ -45,8 +46,8 @@ export interface SerializedError {
   readonly stack?: string | undefined;
   readonly path?: string | undefined;
   readonly hint?: string | undefined;
-  /** Thrown as one of our coded errors (AppError, EngineError), so its message is already in our grammar. */
-  readonly coded?: boolean | undefined;
+  /** The message parts of a coded error (absent for anything else, which the main thread frames). */
+  readonly parts?: ErrorParts | undefined;
 }
 
 export type WorkerReply =

@@ -1,4 +1,4 @@
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import type { Store } from './open-store.js';
 import type { CoverMap } from './range-cover.js';
 import { allShardRecords, type ShardRecord } from './shard-records.js';
@@ -35,7 +35,7 @@ export function checkSchemas(sources: readonly MergeSource[]): void {
   for (const s of sources) {
     const v = schemaVersion(s.db);
     if (v < 1 || v > STORE_MIGRATIONS.length) {
-      throw new AppError('store_error', `Store schema of '${s.name}': expected version 1 to ${STORE_MIGRATIONS.length}, received ${v}`, {
+      throw new CodedError('store_error', { what: `Store schema of '${s.name}'`, expected: `version 1 to ${STORE_MIGRATIONS.length}`, received: `${v}` }, {
         path: s.name,
         hint: v < 1 ? 'this file is not a puzzlesweep store' : 'it was written by a newer puzzlesweep; merge with that version',
       });
@@ -56,7 +56,7 @@ export function checkFingerprints(sources: readonly MergeSource[]): void {
   for (const [id, fps] of byId) {
     if (fps.size < 2) continue;
     const list = [...fps].map(([fp, stores]) => `${fp.slice(0, 12)} (${stores.join(', ')})`).join('; ');
-    throw new AppError('fingerprint_mismatch', `Claim '${id}': expected one fingerprint across the merged stores, received ${fps.size}: ${list}`, {
+    throw new CodedError('fingerprint_mismatch', { what: `Claim '${id}'`, expected: 'one fingerprint across the merged stores', received: `${fps.size}: ${list}` }, {
       path: 'stores',
       hint: 'shards of one sweep must run the same claim file with the same puzzlesweep version; merge each version into its own store',
     });
@@ -73,11 +73,7 @@ export function collectShards(stores: readonly MergeSource[]): Map<string, { sto
     const first = list[0]!;
     const other = list.find((x) => x.record.count !== first.record.count || x.record.plan !== first.record.plan);
     if (other) {
-      throw new AppError(
-        'shard_mismatch',
-        `Shards of claim ${fp.slice(0, 12)}: expected one partition, received ${first.record.count} shards of plan ${first.record.plan} (${first.store}) and ${other.record.count} shards of plan ${other.record.plan} (${other.store})`,
-        { path: 'stores', hint: 'every shard of a sweep must use the same --shard N and the same --max bounds' },
-      );
+      throw new CodedError('shard_mismatch', { what: `Shards of claim ${fp.slice(0, 12)}`, expected: 'one partition', received: `${first.record.count} shards of plan ${first.record.plan} (${first.store}) and ${other.record.count} shards of plan ${other.record.plan} (${other.store})` }, { path: 'stores', hint: 'every shard of a sweep must use the same --shard N and the same --max bounds' });
     }
   }
   return out;

@@ -1,4 +1,4 @@
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { classCoverage } from './chunk-records.js';
 import { checkFingerprints, checkSchemas, collectShards, shardReport, type MergeSource, type ShardReport } from './merge-checks.js';
 import { differingColumns, isRunColumn, rowCopier, sharedColumns, tableNames, tableShape, type Row, type TableShape } from './merge-rows.js';
@@ -170,7 +170,7 @@ export function mergeStores(target: Store, targetName: string, sources: readonly
     crossCheck(covers, cxs, conflicts);
     if (conflicts.length > 0) {
       const shown = conflicts.slice(0, 5).map((c) => `${c.table} ${c.key}: ${c.stores[0]} vs ${c.stores[1]}, ${c.detail}`);
-      throw new AppError('merge_conflict', `Merge: expected one result per instance, received ${conflicts.length} conflict(s): ${shown.join('; ')}${conflicts.length > 5 ? '; …' : ''}`, {
+      throw new CodedError('merge_conflict', { what: 'Merge', expected: 'one result per instance', received: `${conflicts.length} conflict(s): ${shown.join('; ')}${conflicts.length > 5 ? '; …' : ''}` }, {
         path: 'stores',
         hint: 'nothing was written; the stores disagree about the same instances. Run the shards involved again into fresh stores, or leave one of the stores out',
       });

@@ -1,7 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import Database from 'better-sqlite3';
-import { AppError } from '../errors.js';
+import { CodedError } from '../errors/index.js';
 import { registerStoreFunctions } from './store-functions.js';
 import { STORE_MIGRATIONS } from './store-migrations.js';
 import { foreignStore, storeFault } from './store-fault.js';
@@ -23,7 +23,7 @@ function migrate(db: Store): void {
   db.transaction(() => {
     const current = schemaVersion(db);
     if (current > STORE_MIGRATIONS.length) {
-      throw new AppError('store_error', `Store schema: expected version ≤ ${STORE_MIGRATIONS.length}, received ${current}`, {
+      throw new CodedError('store_error', { what: 'Store schema', expected: `version ≤ ${STORE_MIGRATIONS.length}`, received: `${current}` }, {
         hint: 'this store was written by a newer puzzlesweep; upgrade puzzlesweep or use another --db',
       });
     }
@@ -63,7 +63,7 @@ export function openStore(path: string, options: { readonly?: boolean } = {}): S
     db?.close();
     throw (
       storeFault(e, path) ??
-      new AppError('store_error', `Store: expected a readable SQLite file, received '${path}' (${(e as Error).message})`, {
+      new CodedError('store_error', { what: 'Store', expected: 'a readable SQLite file', received: `'${path}' (${(e as Error).message})` }, {
         path: '--db',
         hint: options.readonly ? 'run a sweep first, or point --db at an existing store' : 'check that the folder is writable',
       })

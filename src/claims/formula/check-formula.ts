@@ -11,13 +11,13 @@ export function checkFormula(claim: Claim, ctx: CheckContext, ranges: Ranges): C
   const formula = claim.compare.formula;
   if (formula === undefined) return undefined;
   const fail = ctx.fail;
-  if (claim.transform.length > 0) fail(`Transform: expected no steps next to a formula (the formula builds its boundaries from b), received ${claim.transform.length}`, 'transform', 'write T(b) into the formula\'s boundaries instead');
-  if (claim.compare.rightTheory !== undefined) fail('Right-hand theory: expected none next to a formula, received one', 'compare.rightTheory', 'give a boundary its own "theory" inside the formula');
+  if (claim.transform.length > 0) fail({ what: 'Transform', expected: 'no steps next to a formula (the formula builds its boundaries from b)', received: `${claim.transform.length}` }, 'transform', 'write T(b) into the formula\'s boundaries instead');
+  if (claim.compare.rightTheory !== undefined) fail({ what: 'Right-hand theory', expected: 'none next to a formula', received: 'one' }, 'compare.rightTheory', 'give a boundary its own "theory" inside the formula');
   if (claim.compare.measure.type !== 'value' && claim.compare.measure.type !== 'puzzles') {
-    fail(`Measure: expected 'value' or 'puzzles' with a formula, received '${claim.compare.measure.type}'`, 'compare.measure');
+    fail({ what: 'Measure', expected: `'value' or 'puzzles' with a formula`, received: `'${claim.compare.measure.type}'` }, 'compare.measure');
   }
   if (!RELATIONS.includes(claim.compare.relation.type)) {
-    fail(`Relation: expected ${RELATIONS.map((r) => `'${r}'`).join(' | ')} with a formula, received '${claim.compare.relation.type}'`, 'compare.relation');
+    fail({ what: 'Relation', expected: `${RELATIONS.map((r) => `'${r}'`).join(' | ')} with a formula`, received: `'${claim.compare.relation.type}'` }, 'compare.relation');
   }
   const compiled = compileFormula(formula, {
     theory: ctx.left,
@@ -31,7 +31,7 @@ export function checkFormula(claim: Claim, ctx: CheckContext, ranges: Ranges): C
   const integer = claim.compare.measure.type === 'puzzles' || hasIntegerWeights(ctx.left);
   for (const [name, pieces] of compiled.theories) {
     if (claim.compare.measure.type === 'value' && hasIntegerWeights(pieces) !== integer) {
-      fail(`Formula theory: expected ${integer ? 'integer' : 'polynomial'} values like the claim theory's, received '${name}'`, 'compare.formula');
+      fail({ what: 'Formula theory', expected: `${integer ? 'integer' : 'polynomial'} values like the claim theory's`, received: `'${name}'` }, 'compare.formula');
     }
   }
   return compiled;

@@ -1,5 +1,6 @@
 import { isBuiltinTheory, makeRegion, theoryPieceSet, type PieceSet } from '../../engine/index.js';
-import { evalAffine, valuesText, type Affine } from '../affine.js';
+import { atValues, evalAffine, valuesText, type Affine } from '../affine.js';
+import { toCodedError, type ErrorParts } from '../../errors/index.js';
 import type { Formula, FormulaTerm } from './formula-schema.js';
 import { affineOrFail, compileString, type CompiledString, type LengthEnv, type StringFail } from './string-expr.js';
 
@@ -52,7 +53,7 @@ function compileTerms(terms: readonly FormulaTerm[], path: string, ctx: FormulaC
     const scope = new Set<string>();
     const binders: CompiledBinder[] = term.sum.map((b, k) => {
       const bp = `${tp}.sum[${k}]`;
-      if (/^s[1-6]$/.test(b.name) || scope.has(b.name)) ctx.fail(`Summation name: expected a new name other than s1..s6, received '${b.name}'`, `${bp}.name`);
+      if (/^s[1-6]$/.test(b.name) || scope.has(b.name)) ctx.fail({ what: 'Summation name', expected: 'a new name other than s1..s6', received: `'${b.name}'` }, `${bp}.name`);
       const binder: CompiledBinder =
         'sameContentAs' in b
           ? { name: b.name, kind: 'content', of: compileString(b.sameContentAs, scope, `${bp}.sameContentAs`, ctx.fail, affine) }
@@ -64,9 +65,9 @@ function compileTerms(terms: readonly FormulaTerm[], path: string, ctx: FormulaC
       const pp = `${tp}.product[${k}]`;
       const name = p.theory ?? ctx.theory.name;
       if (p.theory !== undefined) {
-        if (!isBuiltinTheory(p.theory)) ctx.fail(`Theory: expected a built-in theory, received '${p.theory}'`, `${pp}.theory`);
+        if (!isBuiltinTheory(p.theory)) ctx.fail({ what: 'Theory', expected: 'a built-in theory', received: `'${p.theory}'` }, `${pp}.theory`);
         const pieces = theoryPieceSet(p.theory);
-        if ([...pieces.boundaryLabels].sort().join(' ') !== [...ctx.theory.boundaryLabels].sort().join(' ')) ctx.fail(`Theory labels: expected those of the claim theory, received ${pieces.boundaryLabels.join(' ')}`, `${pp}.theory`);
+        if ([...pieces.boundaryLabels].sort().join(' ') !== [...ctx.theory.boundaryLabels].sort().join(' ')) ctx.fail({ what: 'Theory labels', expected: 'those of the claim theory', received: `${pieces.boundaryLabels.join(' ')}` }, `${pp}.theory`);
         theories.set(name, pieces);
       } else theories.set(name, ctx.theory);
       const strings = 'sides' in p ? p.sides.map((s, i) => compileString(s, scope, `${pp}.sides[${i}]`, ctx.fail, affine)) : triangleSides(p.triangle.map((s, i) => compileString(s, scope, `${pp}.triangle[${i}]`, ctx.fail, affine)));
@@ -104,28 +105,28 @@ function checkLengths(terms: readonly CompiledTerm[], path: string, ctx: Formula
       const env: LengthEnv = { variables, sides, bound };
       term.binders.forEach((b, k) => {
         const at = `${path}[${t}].sum[${k}]`;
-        let n: number | string;
+        let n: number | ErrorParts;
         if (b.kind === 'content') n = b.of.length(env);
         else {
           n = evalAffine(b.length, variables);
           const ones = b.ones === undefined ? 0 : evalAffine(b.ones, variables);
-          if (n < 0) n = `Summation length: expected ≥ 0, received ${n}`;
-          else if (ones < 0 || ones > n) n = `Number of 1s: expected 0..${n}, received ${ones}`;
+          if (n < 0) n = { what: 'Summation length', expected: '≥ 0', received: `${n}` };
+          else if (ones < 0 || ones > n) n = { what: 'Number of 1s', expected: `0..${n}`, received: `${ones}` };
         }
-        if (typeof n === 'string') ctx.fail(`${n} at ${valuesText(variables)}`, at);
+        if (typeof n !== 'number') ctx.fail(atValues(n, variables), at);
         bound.set(b.name, n);
       });
       term.product.forEach((p, k) => {
         const at = `${path}[${t}].product[${k}]`;
         const lengths = p.sides.map((s) => s.length(env));
-        const bad = lengths.find((l) => typeof l === 'string');
-        if (bad !== undefined) ctx.fail(`${bad} at ${valuesText(variables)}`, at);
+        const bad = lengths.find((l) => typeof l !== 'number');
+        if (bad !== undefined) ctx.fail(atValues(bad, variables), at);
         const ls = lengths as number[];
-        if (!closes(ls)) ctx.fail(`Boundary lengths: expected s1+s2 = s4+s5 and s2+s3 = s5+s6, received ${ls.join(',')} at ${valuesText(variables)}`, at);
+        if (!closes(ls)) ctx.fail({ what: 'Boundary lengths', expected: 's1+s2 = s4+s5 and s2+s3 = s5+s6', received: `${ls.join(',')} at ${valuesText(variables)}` }, at);
         try {
           makeRegion(ls);
         } catch (e) {
-          ctx.fail(`${(e as Error).message} at ${valuesText(variables)}`, at);
+          ctx.fail(atValues(toCodedError(e).parts, variables), at);
         }
       });
     });

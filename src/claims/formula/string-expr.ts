@@ -1,3 +1,4 @@
+import type { ErrorParts } from '../../errors/index.js';
 import { evalAffine, isParseError, parseAffine, type Affine } from '../affine.js';
 import type { StringExpr } from './formula-schema.js';
 
@@ -17,7 +18,7 @@ export interface LengthEnv {
 /** A compiled string expression: its length from lengths alone, and its value. */
 export interface CompiledString {
   /** The length, or a message saying why the expression is invalid for these lengths. */
-  readonly length: (env: LengthEnv) => number | string;
+  readonly length: (env: LengthEnv) => number | ErrorParts;
   readonly build: (env: StringEnv, variables: Readonly<Record<string, number>>) => string;
   /** Summation names the expression reads. */
   readonly refs: ReadonlySet<string>;
@@ -25,7 +26,7 @@ export interface CompiledString {
   readonly bare?: { readonly name: string; readonly reversed: boolean };
 }
 
-export type StringFail = (message: string, path: string) => never;
+export type StringFail = (parts: ErrorParts, path: string) => never;
 
 const SIDE = /^s([1-6])$/;
 const NONE: ReadonlySet<string> = new Set();
@@ -39,7 +40,7 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
       const i = Number(side[1]) - 1;
       return { length: (env) => env.sides[i]!, build: (env) => env.sides[i]!, refs: NONE };
     }
-    if (!scope.has(expr)) fail(`String name: expected 's1'..'s6' or a summation name bound before (${[...scope].map((s) => `'${s}'`).join(', ') || 'none'}), received '${expr}'`, path);
+    if (!scope.has(expr)) fail({ what: 'String name', expected: `'s1'..'s6' or a summation name bound before (${[...scope].map((s) => `'${s}'`).join(', ') || 'none'})`, received: `'${expr}'` }, path);
     return { length: (env) => env.bound.get(expr)!, build: (env) => env.bound.get(expr)!, refs: new Set([expr]), bare: { name: expr, reversed: false } };
   }
   if ('concat' in expr) {
@@ -49,7 +50,7 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
         let n = 0;
         for (const p of parts) {
           const l = p.length(env);
-          if (typeof l === 'string') return l;
+          if (typeof l !== 'number') return l;
           n += l;
         }
         return n;
@@ -81,7 +82,7 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
     return {
       length: (env) => {
         const n = evalAffine(times, env.variables);
-        return n >= 0 ? n : `Repeat count: expected ≥ 0, received ${n}`;
+        return n >= 0 ? n : { what: 'Repeat count', expected: '≥ 0', received: `${n}` };
       },
       build: (_env, v) => label.repeat(evalAffine(times, v)),
       refs: NONE,
@@ -93,9 +94,9 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
   return {
     length: (env) => {
       const whole = inner.length(env);
-      if (typeof whole === 'string') return whole;
+      if (typeof whole !== 'number') return whole;
       const [f, l] = [evalAffine(from, env.variables), evalAffine(length, env.variables)];
-      if (f < 1 || l < 0 || f + l - 1 > whole) return `Part: expected 1 ≤ from and from+length−1 ≤ ${whole}, received from = ${f}, length = ${l}`;
+      if (f < 1 || l < 0 || f + l - 1 > whole) return { what: 'Part', expected: `1 ≤ from and from+length−1 ≤ ${whole}`, received: `from = ${f}, length = ${l}` };
       return l;
     },
     build: (env, v) => {
@@ -110,8 +111,8 @@ export function compileString(expr: StringExpr, scope: ReadonlySet<string>, path
 export function affineOrFail(fail: StringFail, variables: ReadonlySet<string>) {
   return (e: number | string, path: string): Affine => {
     const a = parseAffine(e);
-    if (isParseError(a)) return fail(`Expression: expected ${a.error}`, path);
-    for (const name of Object.keys(a.coefficients)) if (!variables.has(name)) fail(`Variable: expected one of ${[...variables].map((v) => `'${v}'`).join(' | ') || 'none declared'}, received '${name}'`, path);
+    if (isParseError(a)) return fail(a.error, path);
+    for (const name of Object.keys(a.coefficients)) if (!variables.has(name)) fail({ what: 'Variable', expected: `one of ${[...variables].map((v) => `'${v}'`).join(' | ') || 'none declared'}`, received: `'${name}'` }, path);
     return a;
   };
 }

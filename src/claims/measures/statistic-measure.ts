@@ -12,7 +12,7 @@ export const statisticMeasure = defineMeasure({
     for (const [set, path] of [[left, 'theory'], [right, 'compare.rightTheory']] as const) {
       const kinds = [...new Set(set.pieces.map((p) => p.kind))];
       if (!kinds.includes(m.kind)) {
-        fail(`Statistic kind: expected a piece kind of ${set.name} (${kinds.map((k) => `'${k}'`).join(' | ')}), received '${m.kind}'`, 'compare.measure.kind', path === 'theory' ? undefined : 'the right-hand theory lacks this kind');
+        fail({ what: 'Statistic kind', expected: `a piece kind of ${set.name} (${kinds.map((k) => `'${k}'`).join(' | ')})`, received: `'${m.kind}'` }, 'compare.measure.kind', path === 'theory' ? undefined : 'the right-hand theory lacks this kind');
       }
     }
   },

@@ -20,7 +20,7 @@ export const equalUpToPermutationRelation = defineRelation({
     const size = (l: typeof ctx.lengths) => addAffine(addAffine(l[5]!, l[0]!), l[1]!);
     const n = (v: Record<string, number>) => Math.max(evalAffine(size(ctx.lengths), v), evalAffine(size(ctx.transformedLengths), v));
     const bad = ctx.cornerWhere((v) => n(v) <= MAX_PERMUTED_VARIABLES);
-    if (bad) ctx.fail(`Permutation search: expected at most ${MAX_PERMUTED_VARIABLES} variables, received ${n(bad)} at ${valuesText(bad)}`, `${ctx.path}.searchSpace`, "lower the variable bounds or search 'blockReversals'");
+    if (bad) ctx.fail({ what: 'Permutation search', expected: `at most ${MAX_PERMUTED_VARIABLES} variables`, received: `${n(bad)} at ${valuesText(bad)}` }, `${ctx.path}.searchSpace`, "lower the variable bounds or search 'blockReversals'");
   },
   // Not paired: each boundary's own permutation is recorded.
   symmetric: false,

@@ -4,7 +4,7 @@ import type { CheckContext } from '../compile-context.js';
 export function needIntegerMeasure(type: string, ctx: CheckContext): void {
   if (!ctx.integer) {
     ctx.fail(
-      `Relation ${type}: expected an integer measure ('puzzles', or 'value' of a theory with integer weights), received ${ctx.polynomial ? 'a polynomial value' : 'a statistic distribution'}`,
+      { what: `Relation ${type}`, expected: `an integer measure ('puzzles', or 'value' of a theory with integer weights)`, received: `${ctx.polynomial ? 'a polynomial value' : 'a statistic distribution'}` },
       ctx.path,
       "compare with 'equal', or measure 'puzzles'",
     );
@@ -15,6 +15,6 @@ export function needIntegerMeasure(type: string, ctx: CheckContext): void {
 export function needPolynomialMeasure(type: string, ctx: CheckContext): void {
   const { measureType } = ctx;
   if (!ctx.polynomial) {
-    ctx.fail(`Relation ${type}: expected a polynomial measure ('value' of a theory with y variables), received ${measureType === 'value' ? 'an integer value' : `measure '${measureType}'`}`, ctx.path, "use 'equal' for values without y variables");
+    ctx.fail({ what: `Relation ${type}`, expected: `a polynomial measure ('value' of a theory with y variables)`, received: `${measureType === 'value' ? 'an integer value' : `measure '${measureType}'`}` }, ctx.path, "use 'equal' for values without y variables");
   }
 }

@@ -20,14 +20,14 @@ export const complementStep = defineStep({
     const labels = left.boundaryLabels;
     const binary = [...labels].sort().join('') === '01';
     if (step.labelMap === undefined && !binary) {
-      fail(`Complement: expected the alphabet {0,1} or an explicit labelMap, received labels ${labels.join(' ')}`, path, 'add "labelMap": { "a": "b", "b": "a" } naming the exchange');
+      fail({ what: 'Complement', expected: 'the alphabet {0,1} or an explicit labelMap', received: `labels ${labels.join(' ')}` }, path, 'add "labelMap": { "a": "b", "b": "a" } naming the exchange');
     }
     if (step.labelMap) {
       const keys = Object.keys(step.labelMap).sort().join(' ');
       const values = Object.values(step.labelMap).sort().join(' ');
       const unknown = Object.keys(step.labelMap).concat(Object.values(step.labelMap)).find((l) => !labels.includes(l));
-      if (unknown !== undefined) fail(`Label map: expected boundary labels ${labels.map((l) => `'${l}'`).join(' | ')}, received '${unknown}'`, `${path}.labelMap`);
-      if (keys !== values) fail(`Label map: expected a permutation of the labels it names, received ${JSON.stringify(step.labelMap)}`, `${path}.labelMap`);
+      if (unknown !== undefined) fail({ what: 'Label map', expected: `boundary labels ${labels.map((l) => `'${l}'`).join(' | ')}`, received: `'${unknown}'` }, `${path}.labelMap`);
+      if (keys !== values) fail({ what: 'Label map', expected: 'a permutation of the labels it names', received: `${JSON.stringify(step.labelMap)}` }, `${path}.labelMap`);
     }
   },
   sideMap(step) {

@@ -21,11 +21,11 @@ export const exchangeStep = defineStep({
     .describe('Exchange the strings of two sides of equal length.'),
   check(step, { lengths, cornerWhere, fail, path }) {
     const [i, j] = [step.sides[0] - 1, step.sides[1] - 1];
-    if (i === j) fail(`Exchanged sides: expected two different sides, received ${i + 1} twice`, `${path}.sides`);
+    if (i === j) fail({ what: 'Exchanged sides', expected: 'two different sides', received: `${i + 1} twice` }, `${path}.sides`);
     const bad = cornerWhere((v) => evalAffine(lengths[i]!, v) === evalAffine(lengths[j]!, v));
     if (bad) {
       fail(
-        `Exchanged sides: expected equal lengths, received side ${i + 1} of length ${evalAffine(lengths[i]!, bad)} and side ${j + 1} of length ${evalAffine(lengths[j]!, bad)} at ${valuesText(bad)}`,
+        { what: 'Exchanged sides', expected: 'equal lengths', received: `side ${i + 1} of length ${evalAffine(lengths[i]!, bad)} and side ${j + 1} of length ${evalAffine(lengths[j]!, bad)} at ${valuesText(bad)}` },
         `${path}.sides`,
         'side numbers refer to the region as left by the previous steps',
       );

@@ -9,7 +9,7 @@ export function checkBlock(from: ExpressionInput, to: ExpressionInput, ctx: Chec
   const bad = ctx.pointWhere((v) => 1 <= evalAffine(f, v) && evalAffine(f, v) <= evalAffine(t, v) && evalAffine(t, v) <= n(v));
   if (bad) {
     ctx.fail(
-      `Substitution block: expected 1 ≤ from ≤ to ≤ N, received from = ${evalAffine(f, bad)}, to = ${evalAffine(t, bad)}, N = ${n(bad)} at ${valuesText(bad)}`,
+      { what: 'Substitution block', expected: '1 ≤ from ≤ to ≤ N', received: `from = ${evalAffine(f, bad)}, to = ${evalAffine(t, bad)}, N = ${n(bad)} at ${valuesText(bad)}` },
       ctx.path,
       'indices are those of y_1..y_N, N = s6+s1+s2 of the completed triangle',
     );

@@ -17,7 +17,7 @@ export const reverseBlock = defineSubstitutionStep({
   },
   rangeError(s, values, m) {
     const [from, to] = [at(s.from, values), at(s.to, values)];
-    return 1 <= from && from <= to && to <= m ? undefined : { message: `Substitution block: expected 1 ≤ from ≤ to ≤ ${m}, received from = ${from}, to = ${to}` };
+    return 1 <= from && from <= to && to <= m ? undefined : { parts: { what: 'Substitution block', expected: `1 ≤ from ≤ to ≤ ${m}`, received: `from = ${from}, to = ${to}` } };
   },
   variables: (s) => [...new Set([...expressionVariables(s.from), ...expressionVariables(s.to)])],
   text: (s) => `rev[${s.from}..${s.to}]`,

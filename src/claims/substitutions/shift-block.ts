@@ -24,7 +24,7 @@ export const shiftBlock = defineSubstitutionStep({
   },
   rangeError(s, values, m) {
     const [from, to] = [at(s.from, values), at(s.to, values)];
-    return 1 <= from && from <= to && to <= m ? undefined : { message: `Substitution block: expected 1 ≤ from ≤ to ≤ ${m}, received from = ${from}, to = ${to}` };
+    return 1 <= from && from <= to && to <= m ? undefined : { parts: { what: 'Substitution block', expected: `1 ≤ from ≤ to ≤ ${m}`, received: `from = ${from}, to = ${to}` } };
   },
   variables: (s) => [...new Set([s.from, s.to, s.by].flatMap(expressionVariables))],
   text: (s) => `shift[${s.from}..${s.to}] by ${s.by}`,

@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import type { ErrorParts } from '../../errors/index.js';
 import type { CheckContext } from '../compile-context.js';
 
 /** One kind of y-substitution step: schema, static check, action on one class, metadata. */
@@ -10,7 +11,7 @@ export interface SubstitutionStepDef<S extends { type: string } = { type: string
   /** The step's permutation of y_1..y_m for one class, as 1-based images. */
   images(step: S, values: Readonly<Record<string, number>>, m: number): number[];
   /** Why the step does not fit one class (m variables), with the field at fault; undefined when it does. */
-  rangeError(step: S, values: Readonly<Record<string, number>>, m: number): { message: string; field?: string } | undefined;
+  rangeError(step: S, values: Readonly<Record<string, number>>, m: number): { parts: ErrorParts; field?: string } | undefined;
   variables(step: S): string[];
   /** The step as written, e.g. `rev[1..a]`. */
   text(step: S): string;

@@ -9,7 +9,7 @@ import { parseBoundary, triangleEchoJson, triangleEchoLines } from '../boundary-
 import { classOptions, formOption } from '../class-options.js';
 import type { ValueForm } from '../../report/root-form.js';
 import { runCommand } from '../run-command.js';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import { isLocalizationTheory, localizationLetter, localizationValue, type LocalizationTheory } from '../../run/localization-values.js';
 import { JSON_FORMAT_VERSION, valueJson } from '../../report/value-json.js';
 import type { RegionValue } from '../../claims/count-region.js';
@@ -18,7 +18,7 @@ import type { RegionValue } from '../../claims/count-region.js';
 function countByLocalization(theory: LocalizationTheory, args: CountArgs): void {
   const { triangle } = parseBoundary(args);
   if (!triangle || triangle.strings.length !== 3 || args.sides !== undefined || args.completed || args.statistic !== undefined) {
-    throw new AppError('invalid_argument', `--theory ${theory}: expected a structure constant --triangle λ,μ,ν (or --partitions), received another boundary or option`, {
+    throw new CodedError('invalid_argument', { what: `--theory ${theory}`, expected: 'a structure constant --triangle λ,μ,ν (or --partitions)', received: 'another boundary or option' }, {
       path: '--theory',
       hint: 'no puzzle rule for this theory agrees with localization yet, so only triangles are computed, by localization (README, "Theories")',
     });

@@ -1,5 +1,5 @@
 import type { CommandModule } from 'yargs';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import { listCounterexamples, DEFAULT_STORE_PATH } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { openExistingStore, storedClaims } from '../stored-claims.js';
@@ -28,7 +28,7 @@ export const counterexamplesCommand: CommandModule<object, CounterexamplesArgs> 
   handler: (args) =>
     runCommand(args.json, () => {
       if (args.limit !== undefined && (!Number.isInteger(args.limit) || args.limit < 1)) {
-        throw new AppError('invalid_argument', `--limit: expected a positive integer, received ${args.limit}`, { path: '--limit' });
+        throw new CodedError('invalid_argument', { what: '--limit', expected: 'a positive integer', received: `${args.limit}` }, { path: '--limit' });
       }
       const db = openExistingStore(args.db);
       try {

@@ -1,7 +1,7 @@
 import cliProgress from 'cli-progress';
 import type { CommandModule } from 'yargs';
 import { resolveTheory } from '../../claims/resolve-theory.js';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import { crosscheck, type CrosscheckSummary } from '../../run/crosscheck.js';
 import type { ReferenceTheory } from '../../reference/crosscheck-tables.js';
 import type { LocalizationTheory } from '../../run/localization-values.js';
@@ -42,7 +42,7 @@ export const crosscheckCommand: CommandModule<object, CrosscheckArgs> = {
     runCommand(args.json, () => {
       const maxN = args['max-n'];
       if (!Number.isInteger(maxN) || maxN < 1 || maxN > 9) {
-        throw new AppError('invalid_argument', `--max-n: expected an integer from 1 to 9, received ${maxN}`, { path: '--max-n', hint: 'the reference tables grow fast; 7 takes seconds, 9 minutes' });
+        throw new CodedError('invalid_argument', { what: '--max-n', expected: 'an integer from 1 to 9', received: `${maxN}` }, { path: '--max-n', hint: 'the reference tables grow fast; 7 takes seconds, 9 minutes' });
       }
       const bar = process.stderr.isTTY && !args.json ? new cliProgress.SingleBar({ format: 'crosscheck {bar} {percentage}% | {value}/{total} products | ETA {eta}s', stream: process.stderr }, cliProgress.Presets.shades_classic) : undefined;
       let started = false;

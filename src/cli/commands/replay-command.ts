@@ -4,7 +4,7 @@ import { compileClaimProgram, createEvaluator, planClaim, type ClaimPlanExt } fr
 import { checkClassKey } from '../../run/family-size.js';
 import type { Instance, Measured } from '../../claims/claim-api.js';
 import { enumeratePuzzles, makeRegion, type PieceSet } from '../../engine/index.js';
-import { AppError, toAppError } from '../../errors.js';
+import { CodedError, toCodedError } from '../../errors/index.js';
 import { drawPuzzleText } from '../../report/text-drawing.js';
 import { loadSweepClaim } from '../../run/load-sweep-claim.js';
 import { parseRunOptions } from '../../run/run-options.js';
@@ -45,7 +45,7 @@ function claimJson(ref: string, db: string): { id: string; json: string } {
 
 function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
   if ((args.instance === undefined) === (args.sides === undefined)) {
-    throw new AppError('invalid_argument', `Instance: expected exactly one of --instance or --sides, received ${args.instance === undefined ? 'neither' : 'both'}`, {
+    throw new CodedError('invalid_argument', { what: 'Instance', expected: 'exactly one of --instance or --sides', received: `${args.instance === undefined ? 'neither' : 'both'}` }, {
       path: '--instance / --sides',
       hint: "copy the replay command a run prints, e.g. --instance 'n=3:17'",
     });
@@ -54,7 +54,7 @@ function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
     const at = args.instance.lastIndexOf(':');
     const index = args.instance.slice(at + 1);
     if (at < 0 || !/^\d+$/.test(index)) {
-      throw new AppError('invalid_argument', `--instance: expected <class key>:<index> such as 'n=3:17', received '${args.instance}'`, { path: '--instance' });
+      throw new CodedError('invalid_argument', { what: '--instance', expected: `<class key>:<index> such as 'n=3:17'`, received: `'${args.instance}'` }, { path: '--instance' });
     }
     return plan.instanceAt(plan.classForKey(args.instance.slice(0, at)), BigInt(index));
   }
@@ -66,7 +66,7 @@ function findInstance(plan: ClaimPlanExt, args: ReplayArgs): Instance {
     const index = plan.indexOf(cls, sides);
     if (index !== undefined) return plan.instanceAt(cls, index);
   }
-  throw new AppError('invalid_argument', `--sides: expected a boundary of the claim's family, received side lengths ${lengths.join(',')}`, {
+  throw new CodedError('invalid_argument', { what: '--sides', expected: `a boundary of the claim's family`, received: `side lengths ${lengths.join(',')}` }, {
     path: '--sides',
     hint: 'check the content conditions of the family, or raise a bound with --max var=value',
   });
@@ -89,7 +89,7 @@ function measuredText(label: string, m: Measured, pieces: PieceSet, limit: numbe
       lines.push(`  puzzle ${shown}`, ...drawPuzzleText(puzzle).split('\n').map((l) => `    ${l}`));
     }
   } catch (e) {
-    throw toAppError(e);
+    throw toCodedError(e);
   }
   if (shown === 0 && !more) lines.push('  no puzzles');
   return lines;

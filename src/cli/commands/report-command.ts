@@ -1,5 +1,5 @@
 import type { CommandModule } from 'yargs';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import { DEFAULT_STORE_PATH } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { writeClaimReport } from '../write-claim-report.js';
@@ -26,7 +26,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
   handler: (args) =>
     runCommand(false, () => {
       if (!Number.isInteger(args.draw) || args.draw < 0) {
-        throw new AppError('invalid_argument', `--draw: expected a nonnegative integer, received ${args.draw}`, { path: '--draw' });
+        throw new CodedError('invalid_argument', { what: '--draw', expected: 'a nonnegative integer', received: `${args.draw}` }, { path: '--draw' });
       }
       const { out, found, drawn } = writeClaimReport(args.db, args.claim, { out: args.out, draw: args.draw, form: args.form });
       process.stdout.write(`wrote ${out} (${found} counterexample${found === 1 ? '' : 's'}, ${drawn} drawn)\n`);

@@ -2,7 +2,7 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
 import type { CommandModule } from 'yargs';
 import { claimJsonSchema } from '../../claims/index.js';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import { runCommand } from '../run-command.js';
 
 interface SchemaArgs {
@@ -29,7 +29,7 @@ export const schemaCommand: CommandModule<object, SchemaArgs> = {
         mkdirSync(dirname(args.out), { recursive: true });
         writeFileSync(args.out, text);
       } catch (e) {
-        throw new AppError('invalid_argument', `--out: expected a writable file path, received '${args.out}' (${(e as Error).message})`, { path: '--out' });
+        throw new CodedError('invalid_argument', { what: '--out', expected: 'a writable file path', received: `'${args.out}' (${(e as Error).message})` }, { path: '--out' });
       }
       process.stdout.write(`wrote the claim JSON Schema to ${args.out}\n`);
     }),

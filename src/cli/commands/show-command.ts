@@ -5,7 +5,7 @@ import { drawPuzzleText } from '../../report/text-drawing.js';
 import { boundaryTitle, drawPuzzlesSvg } from '../../report/svg-drawing.js';
 import { drawPuzzlesTikz } from '../../report/tikz-drawing.js';
 import { regionOfSides } from '../../claims/count-region.js';
-import { toAppError } from '../../errors.js';
+import { underFlag } from '../run-command.js';
 import { parseBoundary, triangleEchoLines } from '../boundary-args.js';
 import { classOptions } from '../class-options.js';
 import { announceLargeRegion } from '../size-notice.js';
@@ -64,7 +64,7 @@ function collect(region: Region, sides: readonly string[], pieces: PieceSet, lim
       puzzles.push(puzzle);
     }
   } catch (e) {
-    throw toAppError(e, '--sides');
+    throw underFlag(e, '--sides');
   }
   return { puzzles, more: false };
 }
@@ -73,7 +73,7 @@ function totalPuzzles(region: Region, sides: readonly string[], pieces: PieceSet
   try {
     return countBoundary(region, sides, pieces, { semiring: fillingCountSemiring });
   } catch (e) {
-    throw toAppError(e, '--sides');
+    throw underFlag(e, '--sides');
   }
 }
 

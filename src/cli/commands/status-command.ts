@@ -1,6 +1,6 @@
 import { hostname } from 'node:os';
 import type { CommandModule } from 'yargs';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import {
   classTallies,
   type ClassTally,
@@ -115,9 +115,9 @@ function freeStuckRun(path: string, runId: number): string {
   const db = openStore(path);
   try {
     const holder = listLeaseHolders(db).find((h) => h.runId === runId);
-    if (!holder) throw new AppError('invalid_argument', `--free-run: expected a run holding leased chunks, received ${runId}`, { path: '--free-run', hint: "'puzzlesweep status' lists stuck leases" });
+    if (!holder) throw new CodedError('invalid_argument', { what: '--free-run', expected: 'a run holding leased chunks', received: `${runId}` }, { path: '--free-run', hint: "'puzzlesweep status' lists stuck leases" });
     if (holder.gone === undefined && holder.host === hostname()) {
-      throw new AppError('invalid_argument', `--free-run: expected a run whose process is gone, received run ${runId} (pid ${holder.pid}, alive)`, {
+      throw new CodedError('invalid_argument', { what: '--free-run', expected: 'a run whose process is gone', received: `run ${runId} (pid ${holder.pid}, alive)` }, {
         path: '--free-run',
         hint: 'stop that process first (Ctrl-C keeps its finished chunks)',
       });

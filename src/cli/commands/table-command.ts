@@ -1,7 +1,7 @@
 import cliProgress from 'cli-progress';
 import type { CommandModule } from 'yargs';
 import { resolveTheory } from '../../claims/resolve-theory.js';
-import { AppError } from '../../errors.js';
+import { CodedError } from '../../errors/index.js';
 import { structureTable } from '../../products/parallel-table.js';
 import { parseGrassmannian } from '../../products/partition-strings.js';
 import { TABLE_FORMATS, tableCsv, tableJson, tableTex, type TableFormat } from '../../products/table-formats.js';
@@ -34,10 +34,10 @@ export const tableCommand: CommandModule<object, TableArgs> = {
       const pieces = resolveTheory(args.theory);
       const g = parseGrassmannian(args.grassmannian);
       if (!pieces.boundaryLabels.includes('0') || !pieces.boundaryLabels.includes('1')) {
-        throw new AppError('invalid_argument', `--theory: expected a piece set with boundary labels 0 and 1, received ${pieces.boundaryLabels.join(' ')}`, { path: '--theory' });
+        throw new CodedError('invalid_argument', { what: '--theory', expected: 'a piece set with boundary labels 0 and 1', received: `${pieces.boundaryLabels.join(' ')}` }, { path: '--theory' });
       }
       if (args.workers !== undefined && (!Number.isInteger(args.workers) || args.workers < 1)) {
-        throw new AppError('invalid_argument', `--workers: expected a positive integer, received ${args.workers}`, { path: '--workers' });
+        throw new CodedError('invalid_argument', { what: '--workers', expected: 'a positive integer', received: `${args.workers}` }, { path: '--workers' });
       }
       const label = `Gr(${g.k},${g.n}) ${pieces.name}`;
       const bar = process.stderr.isTTY

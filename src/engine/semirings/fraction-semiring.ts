@@ -1,7 +1,8 @@
-import { EngineError } from '../engine-error.js';
+
 import type { Semiring } from '../semiring.js';
 import { addPoly, constantPoly, mulPoly, ONE_POLY, polyTerms, polyText, scalePoly, subPoly, variablePoly, ZERO_POLY, type Polynomial, type Term } from './polynomial.js';
 import type { StripLetter } from '../weight-formula.js';
+import { CodedError } from '../../errors/index.js';
 
 /**
  * An exact quotient num / (x^low · Π atom^e): `low` is a monomial denominator (so Laurent polynomials need no
@@ -93,7 +94,7 @@ export function addFraction(a: Fraction, b: Fraction): Fraction {
 
 /** a / b; throws `division_by_zero` when b is 0. */
 export function divideFraction(a: Fraction, b: Fraction): Fraction {
-  if (b.num.size === 0) throw new EngineError('division_by_zero', 'Weight quotient: expected a nonzero denominator, received 0', 'weight.formula', 'a strip difference such as y_j − y_i vanishes on pieces whose two strips coincide');
+  if (b.num.size === 0) throw new CodedError('division_by_zero', { what: 'Weight quotient', expected: 'a nonzero denominator', received: '0' }, { path: 'weight.formula', hint: 'a strip difference such as y_j − y_i vanishes on pieces whose two strips coincide' });
   // Move b's denominator up, then b's numerator down: its monomial part into `low`, the rest as one atom.
   let num = mulPoly(a.num, monomial(b.low));
   for (const v of b.atoms.values()) for (let e = 0; e < v.exp; e++) num = mulPoly(num, v.poly);

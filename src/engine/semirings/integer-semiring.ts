@@ -1,6 +1,7 @@
-import { EngineError } from '../engine-error.js';
+
 import type { Semiring } from '../semiring.js';
 import { addInt, intEquals, isZeroInt, mulInt, type SafeInt } from './safe-integer.js';
+import { CodedError } from '../../errors/index.js';
 
 /** Exact integers with automatic promotion to bigint; position weights and variables are rejected. */
 export const integerSemiring: Semiring<SafeInt> = {
@@ -13,10 +14,10 @@ export const integerSemiring: Semiring<SafeInt> = {
   equals: intEquals,
   fromInteger: (n) => n,
   variable(name) {
-    throw new EngineError('internal_error', `Integer value: expected a piece set without formal variables, received variable '${name}'`, 'theory', 'count it with the polynomial semiring');
+    throw new CodedError('internal_error', { what: 'Integer value', expected: 'a piece set without formal variables', received: `variable '${name}'` }, { path: 'theory', hint: 'count it with the polynomial semiring' });
   },
   position() {
-    throw new EngineError('internal_error', 'Integer value: expected a piece set without position weights, received an equivariant piece', 'theory', 'count it with the polynomial or modular semiring');
+    throw new CodedError('internal_error', { what: 'Integer value', expected: 'a piece set without position weights', received: 'an equivariant piece' }, { path: 'theory', hint: 'count it with the polynomial or modular semiring' });
   },
   toText: (a) => a.toString(),
   numeric: { kind: 'integer' },

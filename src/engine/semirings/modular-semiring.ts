@@ -1,5 +1,6 @@
-import { EngineError } from '../engine-error.js';
+
 import type { Semiring } from '../semiring.js';
+import { CodedError } from '../../errors/index.js';
 
 // b^{-1} mod p by the extended Euclidean algorithm (p prime, 0 < b < p; all values stay below 2^26).
 function inverseMod(b: number, p: number): number {
@@ -120,7 +121,7 @@ export function modularSemiring(seed = 1, primes: readonly number[] = DEFAULT_PR
     divide: (a, b) =>
       of((p, k) => {
         if (b[k] === 0) {
-          throw new EngineError('division_by_zero', `Weight quotient: expected a denominator that is nonzero modulo ${p}, received 0`, 'weight.formula', 'a strip difference such as y_j − y_i vanishes on pieces whose two strips coincide');
+          throw new CodedError('division_by_zero', { what: 'Weight quotient', expected: `a denominator that is nonzero modulo ${p}`, received: '0' }, { path: 'weight.formula', hint: 'a strip difference such as y_j − y_i vanishes on pieces whose two strips coincide' });
         }
         return (a[k]! * inverseMod(b[k]!, p)) % p;
       }),

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createEvaluator, parseClaim, planClaim, type ClaimInput } from '../../../src/claims/index.js';
 import { evaluateTerms } from '../../../src/claims/formula/evaluate-formula.js';
-import { AppError } from '../../../src/errors.js';
+import { CodedError } from '../../../src/errors/index.js';
 import { naiveCount } from '../../../src/reference/naive-count.js';
 import { cohomologyPieces, equivariantPieces } from '../reference/puzzle-pieces.js';
 
@@ -17,11 +17,11 @@ const rhombus = (right: object, over: Partial<ClaimInput> = {}): unknown => ({
 
 const split = [{ sum: [{ name: 'eta', length: 'n' }], product: [{ sides: ['s1', '-', 'eta', '-', 's5', '-'] }, { sides: ['-', 's2', '-', 's4', '-', { reverse: 'eta' }] }] }];
 
-function claimError(data: unknown): AppError {
+function claimError(data: unknown): CodedError {
   try {
     parseClaim(data);
   } catch (e) {
-    return e as AppError;
+    return e as CodedError;
   }
   throw new Error('expected an invalid claim');
 }

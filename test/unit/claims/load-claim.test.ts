@@ -3,16 +3,16 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { claimJsonSchema, loadClaim, parseClaim } from '../../../src/claims/index.js';
-import { AppError, formatError } from '../../../src/errors.js';
+import { CodedError, formatError } from '../../../src/errors/index.js';
 
 const fixtures = fileURLToPath(new URL('../../fixtures/claims/', import.meta.url));
 const files = (dir: string) => readdirSync(join(fixtures, dir)).filter((f) => f.endsWith('.json'));
 
-function failure(file: string): AppError {
+function failure(file: string): CodedError {
   try {
     loadClaim(join(fixtures, 'invalid', file));
   } catch (e) {
-    if (e instanceof AppError) return e;
+    if (e instanceof CodedError) return e;
     throw e;
   }
   throw new Error(`${file} was accepted`);
@@ -66,7 +66,7 @@ describe('loadClaim', () => {
   });
 
   it('pins the full terminal form of a few errors', () => {
-    const strip = (e: AppError) => formatError(e).replace(/\(.*fixtures\/claims\//, '(');
+    const strip = (e: CodedError) => formatError(e).replace(/\(.*fixtures\/claims\//, '(');
     expect(strip(failure('sides-do-not-close.json'))).toMatchInlineSnapshot(`
       "✖ Side lengths do not close: expected s1+s2 = s4+s5 and s2+s3 = s5+s6 for all values, received 1,0,1,0,3,0 at a=1,b=3
         → at family.sides (invalid/sides-do-not-close.json)

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { AppError } from '../../../src/errors.js';
+import { CodedError } from '../../../src/errors/index.js';
 import { createEvaluator, parseClaim, planClaim } from '../../../src/claims/index.js';
 import { countBoundary, makeRegion, polyEquals, polynomialSemiring, substitutePoly, theoryPieceSet } from '../../../src/engine/index.js';
 import { allPermutations, blockReversals, isInvolution, permutationKey, substitutionFor } from '../../../src/claims/substitution.js';
@@ -10,11 +10,11 @@ import { expectDeterministicEnumeration } from '../../helpers/contracts.js';
 // (y_m ↦ y_σ(m), listed as the images σ(1..M)); "by hand" means no source beyond those definitions.
 const sigma = (steps: SubstitutionStep[], m: number, values: Record<string, number> = {}) => substitutionFor(steps, values, m);
 
-function failure(run: () => unknown): AppError {
+function failure(run: () => unknown): CodedError {
   try {
     run();
   } catch (e) {
-    if (e instanceof AppError) return e;
+    if (e instanceof CodedError) return e;
     throw e;
   }
   throw new Error('accepted');

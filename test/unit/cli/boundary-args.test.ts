@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { parseBoundary, parseBoundaryArgs, triangleEchoJson } from '../../../src/cli/boundary-args.js';
-import { AppError } from '../../../src/errors.js';
+import { CodedError } from '../../../src/errors/index.js';
 
-function failure(run: () => unknown): AppError {
+function failure(run: () => unknown): CodedError {
   try {
     run();
   } catch (e) {
-    if (e instanceof AppError) return e;
+    if (e instanceof CodedError) return e;
     throw e;
   }
   throw new Error('accepted');

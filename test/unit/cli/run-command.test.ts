@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { runCommand } from '../../../src/cli/run-command.js';
-import { AppError } from '../../../src/errors.js';
+import { CodedError } from '../../../src/errors/index.js';
 
 function capture() {
   const out: string[] = [];
@@ -25,7 +25,7 @@ describe('runCommand (the CLI edge)', () => {
   it('prints a coded error, as JSON too with --json, and exits 2 for bad input (README, "Exit codes")', async () => {
     const { out, err } = capture();
     await runCommand(true, () => {
-      throw new AppError('invalid_argument', '--workers: expected a positive integer, received 0', { path: '--workers' });
+      throw new CodedError('invalid_argument', { what: '--workers', expected: 'a positive integer', received: '0' }, { path: '--workers' });
     });
     const exit = process.exitCode;
     vi.restoreAllMocks();
@@ -37,10 +37,10 @@ describe('runCommand (the CLI edge)', () => {
   it('names the flag of a field the claims layer reports (max, instance); a claim file\'s own paths stay', async () => {
     const { out } = capture();
     await runCommand(true, () => {
-      throw new AppError('invalid_argument', "Variable bound: expected one of 'n', received 'm'", { path: 'max' });
+      throw new CodedError('invalid_argument', { what: "Variable bound", expected: "one of 'n'", received: "'m'" }, { path: 'max' });
     });
     await runCommand(true, () => {
-      throw new AppError('invalid_claim', 'Theory: expected a built-in theory', { path: 'max', file: 'c.json' });
+      throw new CodedError('invalid_claim', { what: 'Theory', expected: 'a built-in theory', received: "'x'" }, { path: 'max', file: 'c.json' });
     });
     vi.restoreAllMocks();
     const [first, second] = out.join('').trim().split('\n').map((l) => JSON.parse(l) as { error: { path: string } });

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { writeOutputFile } from '../../../src/cli/write-output-file.js';
-import { AppError } from '../../../src/errors.js';
+import { CodedError } from '../../../src/errors/index.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-out-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -23,7 +23,7 @@ describe('writeOutputFile', () => {
     } catch (e) {
       error = e;
     }
-    expect(error).toBeInstanceOf(AppError);
+    expect(error).toBeInstanceOf(CodedError);
     expect(error).toMatchObject({ code: 'invalid_argument', path: '--tikz', message: expect.stringMatching(/^Output file: expected a writable path, received '.*x\.tex' \(E[A-Z]+\)$/) });
   });
 });

@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { checkBoundary, EngineError, makeRegion, reverseString, structureConstantSides, theoryPieceSet } from '../../../src/engine/index.js';
+import { checkBoundary, makeRegion, reverseString, structureConstantSides, theoryPieceSet } from '../../../src/engine/index.js';
+import { CodedError } from '../../../src/errors/index.js';
 
-function failure(run: () => unknown): EngineError {
+function failure(run: () => unknown): CodedError {
   try {
     run();
   } catch (e) {
-    if (e instanceof EngineError) return e;
+    if (e instanceof CodedError) return e;
     throw e;
   }
   throw new Error('accepted');

@@ -1,19 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-  countBoundary,
-  countBoundaryValues,
-  EngineError,
-  fillingCountSemiring,
-  generatingSemiring,
-  integerSemiring,
-  polyEquals,
-  polynomialSemiring,
-  statisticWeigher,
-  structureConstantSides,
-  theoryPieceSet,
-  triangleRegion,
-  type Polynomial,
-} from '../../../src/engine/index.js';
+import { countBoundary, countBoundaryValues, fillingCountSemiring, generatingSemiring, integerSemiring, polyEquals, polynomialSemiring, statisticWeigher, structureConstantSides, theoryPieceSet, triangleRegion, type Polynomial } from '../../../src/engine/index.js';
+import { CodedError } from '../../../src/errors/index.js';
 
 const sides = structureConstantSides('010101', '010101', '101010');
 
@@ -43,12 +30,12 @@ describe('countBoundaryValues', () => {
   it('stops with limit_exceeded, naming the limit, when the tables would outgrow it', () => {
     const pieces = theoryPieceSet('equivariant');
     const run = () => countBoundary(triangleRegion(6), sides, pieces, { semiring: polynomialSemiring(6), memoryLimitBytes: 1000 });
-    expect(run).toThrow(EngineError);
+    expect(run).toThrow(CodedError);
     expect(run).toThrow(/expected the sweep's tables to stay within 1 MB/);
     try {
       run();
     } catch (e) {
-      expect((e as EngineError).code).toBe('limit_exceeded');
+      expect((e as CodedError).code).toBe('limit_exceeded');
     }
   });
 });

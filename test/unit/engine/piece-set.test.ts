@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { buildPieceSet, EngineError, theoryPieceSet, type PieceSetSpec } from '../../../src/engine/index.js';
+import { buildPieceSet, theoryPieceSet, type PieceSetSpec } from '../../../src/engine/index.js';
+import { CodedError } from '../../../src/errors/index.js';
 
-function errorOf(spec: PieceSetSpec): EngineError {
+function errorOf(spec: PieceSetSpec): CodedError {
   try {
     buildPieceSet(spec);
   } catch (e) {
-    return e as EngineError;
+    return e as CodedError;
   }
   throw new Error('expected buildPieceSet to throw');
 }

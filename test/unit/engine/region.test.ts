@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { EngineError, makeRegion, regionTriangles, sideEdges, triangleEdges, edgeKey, unitTriangleCount } from '../../../src/engine/index.js';
+import { makeRegion, regionTriangles, sideEdges, triangleEdges, edgeKey, unitTriangleCount } from '../../../src/engine/index.js';
+import { CodedError } from '../../../src/errors/index.js';
 
 function shapes(max: number): number[][] {
   const out: number[][] = [];
@@ -25,7 +26,7 @@ describe('makeRegion', () => {
       try {
         makeRegion([2, 1, 2, 1, 1, 0]);
       } catch (e) {
-        return e as EngineError;
+        return e as CodedError;
       }
       return undefined;
     })();

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { EngineError, formulaUses, parseWeightFormula, type FormulaNode } from '../../../src/engine/index.js';
+import { formulaUses, parseWeightFormula, type FormulaNode } from '../../../src/engine/index.js';
+import { CodedError } from '../../../src/errors/index.js';
 
 // Precedence and associativity as in ordinary algebra [common practice, no source].
 function show(n: FormulaNode): string {
@@ -38,10 +39,10 @@ describe('weight formulas', () => {
       parseWeightFormula(text);
       expect.unreachable();
     } catch (e) {
-      expect(e).toBeInstanceOf(EngineError);
-      expect((e as EngineError).code).toBe('invalid_weight_formula');
-      expect((e as EngineError).path).toBe('weight.formula');
-      expect((e as EngineError).message).toMatch(/^Weight formula: expected .*, received /);
+      expect(e).toBeInstanceOf(CodedError);
+      expect((e as CodedError).code).toBe('invalid_weight_formula');
+      expect((e as CodedError).path).toBe('weight.formula');
+      expect((e as CodedError).message).toMatch(/^Weight formula: expected .*, received /);
     }
   });
 
