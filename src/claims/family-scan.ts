@@ -32,8 +32,8 @@ interface Cell {
   readonly right: Float64Array;
   /** Per side j of T(b): stride of its digit in `right`. */
   readonly rightStride: Float64Array;
-  /** Per side j of T(b): source digit (of side `from_j` of b) → digit in `right`, or null for the same digit. */
-  readonly rankMap: (Int32Array | null)[];
+  /** Per side j of T(b): source digit (of side `from_j` of b) → digit in `right`. */
+  readonly rankMap: Int32Array[];
   /** T(b) is an instance of the class: its index is partnerBase + Σ partnerCoef[j] · digit_j. */
   readonly inClass: boolean;
   readonly partnerBase: number;
@@ -103,51 +103,98 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       }
       return cell;
     };
-    const digit = new Float64Array(6);
+    const digit = new Int32Array(6);
     const contents = new Array<number>(groups.length).fill(0);
     let cellKey = -1;
     let cell = NOT_TABULATED;
     const from = sideMap.map((s) => s.from);
+    // The least significant group changes with every index; the others (and their sums) only every L.size.
+    const last = groups.length - 1;
+    const L = groups[last]!;
+    const innerSide = (k: number) => L.sides.includes(k);
+    const sides = [0, 1, 2, 3, 4, 5];
+    const outerK = sides.filter((k) => !innerSide(k));
+    const innerK = sides.filter(innerSide);
+    const outerJ = sides.filter((j) => !innerSide(from[j]!));
+    const innerJ = sides.filter((j) => innerSide(from[j]!));
+    let outer = -1;
+    let outerKey = 0;
+    let stale = true;
+    let baseOwn = 0;
+    let baseAt = 0;
+    let basePartner = 0;
     for (let i = Number(start), e = Number(end); i < e; i++) {
       // Unrank i: mixed radix over groups (least significant last), then ranks within the group's content.
-      let rest = i;
-      let key = 0;
-      for (let g = groups.length - 1; g >= 0; g--) {
-        const G = groups[g]!;
-        let r = rest % G.size;
-        rest = (rest - r) / G.size;
-        if (G.single) {
-          digit[G.sides[0]!] = r;
-          contents[g] = 0;
-          key *= G.strings.length;
-          continue;
-        }
-        let c = 0;
-        while (r >= G.offsets[c + 1]!) c++;
-        r -= G.offsets[c]!;
-        contents[g] = c;
-        key = key * G.strings.length + c;
-        const n = G.strings[c]!;
-        for (let k = G.sides.length - 1; k >= 0; k--) {
-          const q = r % n;
-          digit[G.sides[k]!] = q;
-          r = (r - q) / n;
+      let r = i % L.size;
+      const q = (i - r) / L.size;
+      if (q !== outer) {
+        outer = q;
+        stale = true;
+        let rest = q;
+        outerKey = 0;
+        let scale = 1;
+        for (let g = last - 1; g >= 0; g--) {
+          const G = groups[g]!;
+          let x = rest % G.size;
+          rest = (rest - x) / G.size;
+          if (G.single) {
+            digit[G.sides[0]!] = x;
+            contents[g] = 0;
+          } else {
+            let c = 0;
+            while (x >= G.offsets[c + 1]!) c++;
+            x -= G.offsets[c]!;
+            contents[g] = c;
+            outerKey += c * scale;
+            const n = G.strings[c]!;
+            for (let k = G.sides.length - 1; k >= 0; k--) {
+              const y = x % n;
+              digit[G.sides[k]!] = y;
+              x = (x - y) / n;
+            }
+          }
+          scale *= G.strings.length;
         }
       }
+      let c = 0;
+      if (L.single) digit[L.sides[0]!] = r;
+      else {
+        while (r >= L.offsets[c + 1]!) c++;
+        r -= L.offsets[c]!;
+        const n = L.strings[c]!;
+        for (let k = L.sides.length - 1; k >= 0; k--) {
+          const y = r % n;
+          digit[L.sides[k]!] = y;
+          r = (r - y) / n;
+        }
+      }
+      contents[last] = c;
+      const key = outerKey * L.strings.length + c;
       if (key !== cellKey) {
         cell = cellOf(contents);
         cellKey = key;
+        stale = true;
       }
       if (!cell.ok) {
         fallback(BigInt(i));
         continue;
       }
-      let at = 0;
-      let partner = cell.partnerBase;
-      for (let j = 0; j < 6; j++) {
-        const d = digit[from[j]!]!;
-        const map = cell.rankMap[j];
-        const t = map ? map[d]! : d;
+      if (stale) {
+        baseOwn = 0;
+        for (const k of outerK) baseOwn += cell.leftStride[k]! * digit[k]!;
+        baseAt = 0;
+        basePartner = cell.partnerBase;
+        for (const j of outerJ) {
+          const t = cell.rankMap[j]![digit[from[j]!]!]!;
+          baseAt += cell.rightStride[j]! * t;
+          basePartner += cell.partnerCoef[j]! * t;
+        }
+        stale = false;
+      }
+      let at = baseAt;
+      let partner = basePartner;
+      for (const j of innerJ) {
+        const t = cell.rankMap[j]![digit[from[j]!]!]!;
         at += cell.rightStride[j]! * t;
         partner += cell.partnerCoef[j]! * t;
       }
@@ -160,8 +207,8 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
         }
         pairable = partner > i;
       }
-      let own = 0;
-      for (let k = 0; k < 6; k++) own += cell.leftStride[k]! * digit[k]!;
+      let own = baseOwn;
+      for (const k of innerK) own += cell.leftStride[k]! * digit[k]!;
       const left = cell.left[own]!;
       if (nonzeroOnly && left === 0 && !pairable) {
         tally.checked++;
@@ -266,12 +313,12 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     // Another theory or outside the class: a table of the images themselves, read by b's own digits (no pairing then).
     const right = countFamily(makeRegion(lengths), images, program.right, { semiring }).numbers;
     if (!right) return undefined;
-    const identity = [null, null, null, null, null, null];
+    const identity = images.map((list) => Int32Array.from(list, (_, d) => d));
     return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length };
   }
 
   // The class cell T(b) falls in, with each side's source digit → rank there; undefined if T(b) is not in the class.
-  function targetCell(layout: Layout, lengths: readonly number[], classLengths: readonly number[], images: readonly string[][]): { contents: number[]; rankMap: (Int32Array | null)[] } | undefined {
+  function targetCell(layout: Layout, lengths: readonly number[], classLengths: readonly number[], images: readonly string[][]): { contents: number[]; rankMap: Int32Array[] } | undefined {
     if (lengths.some((l, i) => l !== classLengths[i])) return undefined;
     const countsOf = (s: string) => {
       const c = new Array<number>(alphabet.length).fill(0);
@@ -279,7 +326,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       return c;
     };
     const contents: number[] = [];
-    const rankMap: (Int32Array | null)[] = [null, null, null, null, null, null];
+    const rankMap: Int32Array[] = [];
     for (const g of layout.groups) {
       const contentOf = (s: string) => {
         const counts = countsOf(s);
@@ -303,7 +350,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
             ranks[d] = rank;
           }
         }
-        rankMap[side] = ranks.every((r, d) => r === d) ? null : ranks;
+        rankMap[side] = ranks;
       }
       contents.push(Math.max(shared, 0));
     }

@@ -10,6 +10,8 @@ Usage (prints one JSON line):
                                                        opposites have equal content; checks that
                                                        exchanging sides I and J keeps the value,
                                                        one open-bottom DP per top part
+  python-dp.py plain THEORY 'a,b,c,d,e,f;...' I J     the same family and claim, the plain loop: one
+                                                       closed DP for b and one for T(b) per labeling
 """
 import itertools
 import json
@@ -194,6 +196,24 @@ def main():
         v = p.count(sides)
         value = v if isinstance(v, int) else len(v)
         out = {'value': str(value) if isinstance(v, int) else None, 'terms': None if isinstance(v, int) else value}
+    elif mode == 'plain':
+        i, j = int(sys.argv[4]) - 1, int(sys.argv[5]) - 1
+        checked = holds = 0
+        for shape in spec.split(';'):
+            lengths = [int(x) for x in shape.split(',')]
+            p = Puzzle(theory, lengths)
+            for c0 in range(lengths[0] + 1):
+                for c1 in range(lengths[1] + 1):
+                    for c2 in range(lengths[2] + 1):
+                        contents = [c0, c1, c2, c0, c1, c2]
+                        choices = [list(strings(lengths[k], contents[k] if lengths[k] == lengths[(k + 3) % 6] else None)) for k in range(6)]
+                        for sides in itertools.product(*choices):
+                            other = list(sides)
+                            other[i], other[j] = sides[j], sides[i]
+                            checked += 1
+                            if p.count(list(sides)) == p.count(other):
+                                holds += 1
+        out = {'checked': checked, 'holds': holds}
     else:
         i, j = int(sys.argv[4]) - 1, int(sys.argv[5]) - 1
         checked = holds = 0
