@@ -1,4 +1,21 @@
-import { DEFAULT_PRIMES, generatingSemiring, modularErrorBound, polyEquals, polyTerms, polyText, substitutePoly, toBigInt, type Polynomial } from '../engine/index.js';
+import {
+  DEFAULT_PRIMES,
+  fractionDenominator,
+  fractionEquals,
+  fractionTerms,
+  fractionText,
+  generatingSemiring,
+  modularErrorBound,
+  polyEquals,
+  polyTerms,
+  polyText,
+  substituteFraction,
+  substitutePoly,
+  toBigInt,
+  type Fraction,
+  type Polynomial,
+  type StripLetter,
+} from '../engine/index.js';
 import type { Measured } from './claim-api.js';
 import type { Relation } from './claim-schema.js';
 import { NAMED_OFFSET, normalizedName, type Value } from './measure.js';
@@ -14,6 +31,7 @@ export function isZeroValue(v: Value): boolean {
   if (v.kind === 'int') return toBigInt(v.v) === 0n;
   if (v.kind === 'gen') return v.v.length === 0;
   if (v.kind === 'poly') return v.v.size === 0;
+  if (v.kind === 'frac') return v.v.num.size === 0;
   return v.v.every((r) => r === 0);
 }
 
@@ -21,6 +39,7 @@ export function equalValues(a: Value, b: Value): boolean {
   if (a.kind === 'int' && b.kind === 'int') return toBigInt(a.v) === toBigInt(b.v);
   if (a.kind === 'gen' && b.kind === 'gen') return generatingSemiring.equals(a.v, b.v);
   if (a.kind === 'poly' && b.kind === 'poly') return polyEquals(a.v, b.v);
+  if (a.kind === 'frac' && b.kind === 'frac') return fractionEquals(a.v, b.v);
   if (a.kind === 'mod' && b.kind === 'mod') return a.v.every((r, k) => r === b.v[k]);
   return false;
 }
@@ -28,7 +47,10 @@ export function equalValues(a: Value, b: Value): boolean {
 /** Chance that two modular values agree although the exact polynomials differ. */
 export function errorBoundOf(a: Value, b: Value): number {
   if (a.kind !== 'mod' || b.kind !== 'mod') return 0;
-  return modularErrorBound(Math.max(a.degree, b.degree, 1), toBigInt(a.norm) + toBigInt(b.norm) + 1n, DEFAULT_PRIMES);
+  if (a.unbounded || b.unbounded) return 1;
+  // Laurent values: t^a·(L − R) is a polynomial of degree at most the sum of the two sides' bounds.
+  const degree = a.laurent || b.laurent ? a.degree + b.degree : Math.max(a.degree, b.degree, 1);
+  return modularErrorBound(degree, toBigInt(a.norm) + toBigInt(b.norm) + 1n, DEFAULT_PRIMES);
 }
 
 /** Whether `left relation right` holds (equality relations only see the already-substituted right value). */
@@ -62,6 +84,34 @@ export function findPermutations(space: 'blockReversals' | 'allPermutations', m:
     // σ(right) at x is right at the point whose k-th coordinate is x_σ(k).
     if (evalMod(right, (k) => (k < m ? xs[sigma[k]! - 1]! : xs[k]!)) !== target) continue;
     if (!polyEquals(left, substitutePoly(right, (k) => (k < m ? sigma[k]! - 1 : k)))) continue;
+    if (found.length >= MAX_LISTED_PERMUTATIONS) {
+      truncated = true;
+      break;
+    }
+    found.push(sigma);
+  }
+  return { found, truncated };
+}
+
+// A quotient at a point modulo PRIME; undefined when its denominator vanishes there (then only exact tests decide).
+function evalFractionMod(f: Fraction, point: (k: number) => number): number | undefined {
+  const d = evalMod(fractionDenominator(f), point);
+  if (d === 0) return undefined;
+  let inv = 1;
+  for (let e = PRIME - 2, b = d; e > 0; e >>= 1, b = Number((BigInt(b) * BigInt(b)) % BigInt(PRIME))) if (e & 1) inv = Number((BigInt(inv) * BigInt(b)) % BigInt(PRIME));
+  return Number((BigInt(evalMod(f.num, point)) * BigInt(inv)) % BigInt(PRIME));
+}
+
+/** `findPermutations` for quotients: σ acts on numerator and denominator alike; every hit is confirmed exactly. */
+export function findFractionPermutations(space: 'blockReversals' | 'allPermutations', m: number, left: Fraction, right: Fraction): { found: Permutation[]; truncated: boolean } {
+  const xs = Array.from({ length: NAMED_OFFSET + 64 }, (_, k) => (Math.imul(k + 1, 2654435761) >>> 0) % PRIME);
+  const target = evalFractionMod(left, (k) => xs[k]!);
+  const found: Permutation[] = [];
+  let truncated = false;
+  for (const sigma of space === 'blockReversals' ? blockReversals(m) : allPermutations(m)) {
+    const at = target === undefined ? undefined : evalFractionMod(right, (k) => (k < m ? xs[sigma[k]! - 1]! : xs[k]!));
+    if (at !== undefined && at !== target) continue;
+    if (!fractionEquals(left, substituteFraction(right, (k) => (k < m ? sigma[k]! - 1 : k)))) continue;
     if (found.length >= MAX_LISTED_PERMUTATIONS) {
       truncated = true;
       break;
@@ -106,6 +156,7 @@ function render(lengths: readonly number[], v: Value, names: readonly string[]):
   if (v.kind === 'int') return { text: v.v.toString(), json: v.v.toString() };
   if (v.kind === 'gen') return { text: generatingSemiring.toText(v.v), json: { distribution: v.v.map((c) => c.toString()) } };
   if (v.kind === 'mod') return { text: `[${v.v.map((r, k) => `${r} mod ${DEFAULT_PRIMES[k]}`).join(', ')}]`, json: { residues: [...v.v], primes: [...DEFAULT_PRIMES] } };
+  if (v.kind === 'frac') return renderFraction(lengths, v.v, v.letter, names);
   // The same layout as the CLI's value JSON: y_1..y_n, then named variables, exponents as arrays.
   let n = lengths[5]! + lengths[0]! + lengths[1]!;
   for (const key of v.v.keys()) for (let k = 0; k < Math.min(key.length, NAMED_OFFSET); k++) if (key.charCodeAt(k) > 0) n = Math.max(n, k + 1);
@@ -114,4 +165,24 @@ function render(lengths: readonly number[], v: Value, names: readonly string[]):
   const terms = polyTerms(dense, n + names.length).map((t) => ({ coefficient: t.coefficient.toString(), exponents: t.exponents }));
   const variables = names.length ? { variables: [...Array.from({ length: n }, (_, k) => `y${k + 1}`), ...names] } : {};
   return { text, json: { text, terms, ...variables } };
+}
+
+// Quotients as `count --json` writes them: Laurent terms (negative exponents) of t_1..t_N or y_1..y_N then the
+// named variables; other quotients as numerator and denominator term lists.
+function renderFraction(lengths: readonly number[], f: Fraction, letter: StripLetter, names: readonly string[]): { text: string; json: unknown } {
+  let n = lengths[5]! + lengths[0]! + lengths[1]!;
+  const seen = (k: number) => {
+    if (k < NAMED_OFFSET) n = Math.max(n, k + 1);
+  };
+  for (const key of f.num.keys()) for (let k = 0; k < key.length; k++) if (key.charCodeAt(k) > 0) seen(k);
+  f.low.forEach((e, k) => e !== 0 && seen(k));
+  const dense = substituteFraction(f, (k) => (k < NAMED_OFFSET ? k : n + k - NAMED_OFFSET));
+  const nameOf = (k: number) => (k < n ? `${letter}${k + 1}` : (names[k - n] ?? `v${k}`));
+  const text = fractionText(dense, nameOf);
+  const nvars = n + names.length;
+  const variables = names.length ? { variables: [...Array.from({ length: n }, (_, k) => `${letter}${k + 1}`), ...names] } : {};
+  const termJson = (t: { coefficient: bigint; exponents: readonly number[] }) => ({ coefficient: t.coefficient.toString(), exponents: [...t.exponents] });
+  const laurent = fractionTerms(dense, nvars);
+  if (laurent) return { text, json: { text, terms: laurent.map(termJson), ...variables } };
+  return { text, json: { text, numerator: polyTerms(dense.num, nvars).map(termJson), denominator: polyTerms(fractionDenominator(dense), nvars).map(termJson), ...variables } };
 }

@@ -59,13 +59,14 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const fail = failer(file);
   const left = resolve(claim.theory, 'theory', file, fail);
   const right = claim.compare.rightTheory === undefined ? left : resolve(claim.compare.rightTheory, 'compare.rightTheory', file, fail);
-  // Sweeps compare exact polynomials (and confirm every counterexample exactly); quotient values are not wired in yet.
+  // Quotient values (Laurent polynomials, rational functions) are compared exactly or at random points, but a
+  // `compare.formula` adds and multiplies polynomials only.
   for (const [pieces, path] of [[left, 'theory'], [right, 'compare.rightTheory']] as const) {
-    if (claim.compare.measure.type === 'value' && valueRing(pieces).kind === 'fraction') {
+    if (claim.compare.formula !== undefined && claim.compare.measure.type === 'value' && valueRing(pieces).kind === 'fraction') {
       fail(
-        { what: 'Theory values', expected: 'integers or polynomials for a swept value', received: `quotients (piece set '${pieces.name}' has weight formulas in t or with '/')` },
+        { what: 'Formula sides', expected: 'integer or polynomial values', received: `quotients (piece set '${pieces.name}' has weight formulas in t or with '/')` },
         path,
-        'count such boundaries with `count`; sweeping quotient-valued theories is not supported yet (README, "Theories")',
+        "compare such values with a transform and a relation ('equal', 'equalAfterSubstitution', …) instead of compare.formula",
       );
     }
   }

@@ -1,13 +1,12 @@
 import { CodedError } from '../errors/index.js';
 import { evalAffine } from './affine.js';
-import { substitutePoly } from '../engine/index.js';
 import { applySideMap, applyTransform } from './boundary-transform.js';
 import type { EvaluateOptions, Evaluator, Instance, InstanceResult, Measured, SizeClass } from './claim-api.js';
 import type { Claim } from './claim-schema.js';
 import { asProgram, type ClaimProgram } from './compile-claim-program.js';
-import { errorBoundOf, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measured } from './compare-values.js';
+import { errorBoundOf, findFractionPermutations, findPermutations, isZeroValue, MAX_MODULAR_ERROR, measured } from './compare-values.js';
 import { sizeOf } from './compile-claim.js';
-import { Meter, type Mode, type Value } from './measure.js';
+import { isZeroDenominator, Meter, substituteValue, type Mode, type Value } from './measure.js';
 import { permutationText } from './permutation-text.js';
 import { familyScanner } from './family-scan.js';
 import { FORMULA_THEORY, FormulaMeter } from './formula/formula-meter.js';
@@ -99,24 +98,38 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     const cache = !confirming;
     // right: T(b)'s own value; compared: σ(right) for a substitution. A modular sweep measures only σ(right)
     // (σ moves the evaluation point); exact mode measures the own value and substitutes it.
-    const measureAll = (mode: Mode): { left: Value; right?: Value; compared?: Value } => {
+    const measureOnce = (mode: Mode, attempt: number): { left: Value; right?: Value; compared?: Value } => {
       if (formula) {
         const left = formula.left ? formula.side(formula.left, sides, cls.variables, cache) : leftMeter.value(lengths, sides, 'exact', undefined, cache);
         if (claim.family.nonzeroOnly && isZeroValue(left)) return { left };
         const right = formula.side(formula.right, sides, cls.variables, cache);
         return { left, right, compared: right };
       }
-      const left = leftMeter.value(lengths, sides, mode, undefined, cache);
+      const left = leftMeter.value(lengths, sides, mode, undefined, cache, attempt);
       // A zero left value is skipped, unless it stands for its partner too, whose value is the right one here.
       if (claim.family.nonzeroOnly && isZeroValue(left) && !pairable) return { left };
       if (!sigma) {
-        const right = rightMeter.value(t.lengths, t.sides, mode, undefined, cache);
+        const right = rightMeter.value(t.lengths, t.sides, mode, undefined, cache, attempt);
         return { left, right, compared: right };
       }
-      if (mode === 'modular') return { left, compared: rightMeter.value(t.lengths, t.sides, mode, sigma, cache) };
+      if (mode === 'modular') return { left, compared: rightMeter.value(t.lengths, t.sides, mode, sigma, cache, attempt) };
       const right = rightMeter.value(t.lengths, t.sides, mode, undefined, cache);
-      const compared: Value = right.kind === 'poly' ? { kind: 'poly', v: substitutePoly(right.v, (k) => (k < sigma.length ? sigma[k]! - 1 : k)) } : right;
-      return { left, right, compared };
+      return { left, right, compared: substituteValue(right, sigma) };
+    };
+    // A quotient weight whose denominator vanishes at the random point: both sides are redrawn at a new
+    // point (seed + attempt); after three such points the instance is decided exactly.
+    const measureAll = (m: Mode): { left: Value; right?: Value; compared?: Value } => {
+      if (m === 'modular') {
+        for (let attempt = 0; attempt < 3; attempt++) {
+          try {
+            return measureOnce(m, attempt);
+          } catch (e) {
+            if (!isZeroDenominator(e)) throw e;
+          }
+        }
+        mode = 'exact';
+      }
+      return measureOnce(mode, 0);
     };
     let values = measureAll(mode);
     const show = (v: Value, theory: string, ls: readonly number[], ss: readonly string[]) => measured(theory, ls, ss, v, names, confirming);
@@ -141,18 +154,18 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
         ...(mode === 'modular' ? { errorBound: errorBoundOf(values.left, values.compared ?? values.left) } : {}),
       };
     }
-    if (searchSpace && values.left.kind === 'poly' && values.compared.kind === 'poly') {
-      const { found, truncated } = findPermutations(searchSpace, m, values.left.v, values.compared.v);
-      return {
-        ...base,
-        status: found.length ? 'holds' : 'fails',
-        ...shown(),
-        vacuous: bothZero(),
-        ...(found.length ? { permutation: found[0]!, permutations: found } : {}),
-        ...(truncated ? { permutationsTruncated: true } : {}),
-        method: 'exact',
-      };
-    }
+    // The permutation search compares exactly (after a filter at a random point); quotients alike.
+    const permutationResult = ({ found, truncated }: { found: Permutation[]; truncated: boolean }): InstanceResult => ({
+      ...base,
+      status: found.length ? 'holds' : 'fails',
+      ...shown(),
+      vacuous: bothZero(),
+      ...(found.length ? { permutation: found[0]!, permutations: found } : {}),
+      ...(truncated ? { permutationsTruncated: true } : {}),
+      method: 'exact',
+    });
+    if (searchSpace && values.left.kind === 'poly' && values.compared.kind === 'poly') return permutationResult(findPermutations(searchSpace, m, values.left.v, values.compared.v));
+    if (searchSpace && values.left.kind === 'frac' && values.compared.kind === 'frac') return permutationResult(findFractionPermutations(searchSpace, m, values.left.v, values.compared.v));
     let holds = program.relation.holds(values.left, values.compared);
     let errorBound = mode === 'modular' ? errorBoundOf(values.left, values.compared) : 0;
     if (holds && mode === 'modular' && errorBound > MAX_MODULAR_ERROR) {

@@ -1,6 +1,11 @@
 import {
   countCompletions,
   DEFAULT_PRIMES,
+  EngineError,
+  fractionSemiring,
+  laurentSpan,
+  substituteFraction,
+  valueRing,
   fillingCountSemiring,
   formulaDegree,
   generatingSemiring,
@@ -12,7 +17,9 @@ import {
   statisticWeigher,
   unitTriangleCount,
   type CountOptions,
+  type Fraction,
   type Generating,
+  type StripLetter,
   type PieceSet,
   type Polynomial,
   type Residues,
@@ -32,7 +39,30 @@ export type Value =
   | { readonly kind: 'int'; readonly v: SafeInt }
   | { readonly kind: 'gen'; readonly v: Generating }
   | { readonly kind: 'poly'; readonly v: Polynomial }
-  | { readonly kind: 'mod'; readonly v: Residues; readonly norm: SafeInt; readonly degree: number };
+  | { readonly kind: 'frac'; readonly v: Fraction; readonly letter: StripLetter }
+  | {
+      readonly kind: 'mod';
+      readonly v: Residues;
+      readonly norm: SafeInt;
+      readonly degree: number;
+      /** A Laurent polynomial: `degree` bounds t^a·v for the shift a clearing its denominators (compare by the sum of two degrees). */
+      readonly laurent?: boolean;
+      /** A quotient with no coefficient bound: equal residues prove nothing, so a "holds" is decided exactly. */
+      readonly unbounded?: boolean;
+    };
+
+/** True when a modular evaluation met a denominator that vanishes at its random point (the point is redrawn). */
+export function isZeroDenominator(e: unknown): boolean {
+  return e instanceof EngineError && e.code === 'division_by_zero';
+}
+
+/** σ applied to an exact value: y_m (or t_m) ↦ y_σ(m), negative exponents of Laurent values included. */
+export function substituteValue(v: Value, sigma: Permutation): Value {
+  const rename = (k: number) => (k < sigma.length ? sigma[k]! - 1 : k);
+  if (v.kind === 'poly') return { kind: 'poly', v: substitutePoly(v.v, rename) };
+  if (v.kind === 'frac') return { ...v, v: substituteFraction(v.v, rename) };
+  return v;
+}
 
 const abs = (n: number) => (n < 0 ? -n : n);
 
@@ -44,6 +74,8 @@ const normSemiring: Semiring<SafeInt> = {
   variable: () => 1,
   position: () => 2,
   strip: () => 1,
+  // Used for Laurent weights only, whose divisors are ± monomials of 1-norm 1.
+  divide: (a) => a,
 };
 
 // The largest total degree of a piece weight, so a value's degree is at most this times the triangle count.
@@ -70,6 +102,11 @@ export class Meter {
   /** The last sweep used per tag (value, norm, …), for runs of instances that differ only in side 5. */
   private readonly last = new Map<string, { lengths: readonly number[]; sides: readonly string[]; map: Map<string, unknown> }>();
   readonly polynomial: boolean;
+  /** Values are quotients (Laurent polynomials in t, or rational functions): exact values are fractions. */
+  readonly fraction: boolean;
+  private readonly letter: StripLetter;
+  /** Degree bounds of the weights when every one is a Laurent polynomial (undefined for other quotients). */
+  private readonly span: { high: number; negative: number } | undefined;
 
   constructor(
     readonly pieces: PieceSet,
@@ -80,6 +117,10 @@ export class Meter {
   ) {
     this.cache = new LruCache(cacheSize);
     this.polynomial = measure.type === 'value' && !hasIntegerWeights(pieces);
+    const ring = this.polynomial ? valueRing(pieces) : undefined;
+    this.fraction = ring?.kind === 'fraction';
+    this.letter = ring?.letter ?? 'y';
+    this.span = this.fraction ? laurentBound(pieces) : undefined;
   }
 
   // One sweep for every side-5 labeling; the cache makes consecutive instances (same sides 1-4, 6) a lookup.
@@ -100,7 +141,7 @@ export class Meter {
   }
 
   /** The measure of one boundary; `sigma` (polynomials only) renames y_m to y_σ(m) in the result. */
-  value(lengths: readonly number[], sides: readonly string[], mode: Mode, sigma?: Permutation, useCache = true): Value {
+  value(lengths: readonly number[], sides: readonly string[], mode: Mode, sigma?: Permutation, useCache = true, attempt = 0): Value {
     const side5 = sides[4]!;
     const m = this.measure;
     if (m.type === 'puzzles' || (m.type === 'value' && !this.polynomial)) {
@@ -113,23 +154,34 @@ export class Meter {
       return { kind: 'gen', v: (map.get(side5) as Generating | undefined) ?? [] };
     }
     if (mode === 'modular') {
-      const key = sigma ? sigma.join(',') : '';
+      // A redrawn point (after a vanishing denominator) is seed + attempt; both sides of a comparison share it.
+      const key = `${attempt}|${sigma ? sigma.join(',') : ''}`;
       let semiring = this.modular.get(key);
       if (!semiring) {
-        semiring = modularSemiring(MODULAR_SEED, DEFAULT_PRIMES, sigma ? (i) => sigma[i - 1] ?? i : undefined);
+        semiring = modularSemiring(MODULAR_SEED + attempt, DEFAULT_PRIMES, sigma ? (i) => sigma[i - 1] ?? i : undefined);
         // Draw the named variables' points in one order, so both sides of a comparison share them.
         for (const name of this.names) semiring.variable(name);
         this.modular.set(key, semiring);
       }
       const ring = semiring;
       const map = this.completions(`mod:${key}`, lengths, sides, () => ({ semiring: ring }), (v) => v, useCache);
+      const v = (map.get(side5) as Residues | undefined) ?? ring.zero;
+      const triangles = unitTriangleCount(makeRegion(lengths));
+      if (this.fraction && !this.span) return { kind: 'mod', v, norm: 0, degree: 0, unbounded: true };
       const norms = this.completions('norm', lengths, sides, () => ({ semiring: normSemiring }), (v) => v, useCache);
-      return {
-        kind: 'mod',
-        v: (map.get(side5) as Residues | undefined) ?? ring.zero,
-        norm: (norms.get(side5) as SafeInt | undefined) ?? 0,
-        degree: unitTriangleCount(makeRegion(lengths)) * weightDegree(this.pieces),
-      };
+      const norm = (norms.get(side5) as SafeInt | undefined) ?? 0;
+      if (this.span) {
+        // t^a·v is a polynomial for a_k ≤ T·negative per variable, of degree ≤ T·high + Σ a_k; the variables
+        // themselves are denominators that must not vanish (+ their number), see modularErrorBound.
+        const variables = makeRegion(lengths).size + this.names.length;
+        return { kind: 'mod', v, norm, degree: triangles * Math.max(this.span.high, 0) + variables * (triangles * this.span.negative + 1), laurent: true };
+      }
+      return { kind: 'mod', v, norm, degree: triangles * weightDegree(this.pieces) };
+    }
+    if (this.fraction) {
+      let f = (this.fractions(lengths, sides, useCache).get(side5) as Fraction | undefined) ?? fractionSemiring(0).zero;
+      if (sigma) f = substituteFraction(f, (k) => (k < sigma.length ? sigma[k]! - 1 : k));
+      return { kind: 'frac', v: f, letter: this.letter };
     }
     const map = this.polynomials(lengths, sides, useCache);
     let p = (map.get(side5) as Polynomial | undefined) ?? new Map<string, bigint>();
@@ -153,6 +205,27 @@ export class Meter {
     );
   }
 
+  private fractions(lengths: readonly number[], sides: readonly string[], useCache: boolean): Map<string, unknown> {
+    const region = makeRegion(lengths);
+    let ring = fractionSemiring(region.size, this.letter);
+    return this.completions(
+      'frac',
+      lengths,
+      sides,
+      () => {
+        ring = fractionSemiring(region.size, this.letter);
+        return { semiring: ring };
+      },
+      (v) => {
+        const seen = ring.variableNames;
+        const f = v as Fraction;
+        if (seen.length === 0) return f;
+        return substituteFraction(f, (k) => (k < region.size ? k : NAMED_OFFSET + this.names.indexOf(seen[k - region.size]!)));
+      },
+      useCache,
+    );
+  }
+
   /** Every labeling of side 5 reached by some puzzle, with its exact value or puzzle count, from one sweep (side 5 of `sides` is ignored). */
   side5Values(lengths: readonly number[], sides: readonly string[]): [string, Value][] {
     const m = this.measure;
@@ -162,6 +235,7 @@ export class Meter {
       return [...map].map(([k, v]): [string, Value] => [k, { kind: 'int', v: v as SafeInt }]);
     }
     if (m.type === 'statistic') throw new Error('side-5 values of a statistic are not needed');
+    if (this.fraction) return [...this.fractions(lengths, sides, true)].map(([k, v]): [string, Value] => [k, { kind: 'frac', v: v as Fraction, letter: this.letter }]);
     return [...this.polynomials(lengths, sides, true)].map(([k, v]): [string, Value] => [k, { kind: 'poly', v: v as Polynomial }]);
   }
 
@@ -170,6 +244,25 @@ export class Meter {
     if (seen.length === 0) return p;
     return substitutePoly(p, (k) => (k < size ? k : NAMED_OFFSET + this.names.indexOf(seen[k - size]!)));
   }
+}
+
+// Largest degree bounds over the weights, when every weight is a Laurent polynomial.
+function laurentBound(pieces: PieceSet): { high: number; negative: number } | undefined {
+  let high = 0;
+  let negative = 0;
+  for (const p of pieces.pieces) {
+    const w = p.weight;
+    if (w.type === 'integer') continue;
+    if (w.type !== 'formula') {
+      high = Math.max(high, 1);
+      continue;
+    }
+    const s = laurentSpan(w.formula);
+    if (!s) return undefined;
+    high = Math.max(high, s.high);
+    negative = Math.max(negative, s.negative);
+  }
+  return { high, negative };
 }
 
 /** Variable name of a normalized polynomial index. */

@@ -1,6 +1,6 @@
 
 import type { Semiring } from '../semiring.js';
-import { addPoly, constantPoly, mulPoly, ONE_POLY, polyTerms, polyText, scalePoly, subPoly, variablePoly, ZERO_POLY, type Polynomial, type Term } from './polynomial.js';
+import { addPoly, constantPoly, mulPoly, ONE_POLY, polyTerms, polyText, scalePoly, subPoly, substitutePoly, variablePoly, ZERO_POLY, type Polynomial, type Term } from './polynomial.js';
 import type { StripLetter } from '../weight-formula.js';
 import { CodedError } from '../../errors/index.js';
 
@@ -196,4 +196,30 @@ export function fractionSemiring(size: number, letter: StripLetter = 'y'): Fract
     divide: divideFraction,
     toText: (a) => fractionText(a, variableName),
   };
+}
+
+/**
+ * Renames the variables of a quotient, k ↦ rename(k), in its numerator, its monomial denominator and its
+ * atoms alike: a permutation σ of t_1..t_N acts on t_i/t_j as t_σ(i)/t_σ(j) (negative exponents move too).
+ */
+export function substituteFraction(a: Fraction, rename: (k: number) => number): Fraction {
+  if (a.num.size === 0) return a;
+  const low: number[] = [];
+  a.low.forEach((e, k) => {
+    if (e === 0) return;
+    const to = rename(k);
+    while (low.length <= to) low.push(0);
+    low[to]! += e;
+  });
+  let atoms = a.atoms;
+  if (a.atoms.size > 0) {
+    const m = new Map<string, { poly: Polynomial; exp: number }>();
+    for (const v of a.atoms.values()) {
+      const poly = substitutePoly(v.poly, rename);
+      const key = [...poly].map(([k, c]) => `${[...k].map((ch) => ch.charCodeAt(0)).join('.')}:${c}`).sort().join('|');
+      m.set(key, { poly, exp: v.exp + (m.get(key)?.exp ?? 0) });
+    }
+    atoms = m;
+  }
+  return tidy(substitutePoly(a.num, rename), low, atoms);
 }
