@@ -1,7 +1,6 @@
 import {
   countCompletions,
   DEFAULT_PRIMES,
-  EngineError,
   fractionSemiring,
   laurentSpan,
   substituteFraction,
@@ -26,6 +25,7 @@ import {
   type SafeInt,
   type Semiring,
 } from '../engine/index.js';
+import { CodedError } from '../errors/index.js';
 import type { Measure } from './claim-schema.js';
 import { hasIntegerWeights } from './resolve-theory.js';
 import { LruCache } from './lru-cache.js';
@@ -53,7 +53,7 @@ export type Value =
 
 /** True when a modular evaluation met a denominator that vanishes at its random point (the point is redrawn). */
 export function isZeroDenominator(e: unknown): boolean {
-  return e instanceof EngineError && e.code === 'division_by_zero';
+  return e instanceof CodedError && e.code === 'division_by_zero';
 }
 
 /** σ applied to an exact value: y_m (or t_m) ↦ y_σ(m), negative exponents of Laurent values included. */
