@@ -22,7 +22,7 @@ import {
   type SafeInt,
 } from '../engine/index.js';
 import { CodedError, toCodedError } from '../errors/index.js';
-import { hasIntegerWeights } from './resolve-theory.js';
+import { hasIntegerWeights } from './integer-weights.js';
 
 export type RegionValue =
   | { readonly type: 'integer'; readonly value: SafeInt }

@@ -27,7 +27,7 @@ import {
 } from '../engine/index.js';
 import { CodedError } from '../errors/index.js';
 import type { Measure } from './claim-schema.js';
-import { hasIntegerWeights } from './resolve-theory.js';
+import { hasIntegerWeights } from './integer-weights.js';
 import { LruCache } from './lru-cache.js';
 import type { Permutation } from './substitution.js';
 

@@ -71,7 +71,5 @@ export function resolveTheory(nameOrPath: string): PieceSet {
   return pieceSetFromJson(readJsonFile(nameOrPath, 'Piece-set file'), nameOrPath);
 }
 
-/** True when every piece weighs an integer, so values are integers rather than polynomials. */
-export function hasIntegerWeights(pieces: PieceSet): boolean {
-  return pieces.pieces.every((p) => p.weight.type === 'integer');
-}
+// Kept apart (no zod) so that counting a built-in theory never loads the schema.
+export { hasIntegerWeights } from './integer-weights.js';

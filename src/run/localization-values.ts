@@ -6,13 +6,9 @@ import type { RefFraction } from '../reference/ref-fraction.js';
 import type { RefLaurent } from '../reference/ref-laurent.js';
 import { schwartzMacPhersonTable } from '../reference/ssm-localization.js';
 
-/** Theories whose structure constants come from localization only (no puzzle rule is built in). */
-export const LOCALIZATION_THEORIES = ['equivariant-k-theory', 'ssm', 'ssm-chern'] as const;
-export type LocalizationTheory = (typeof LOCALIZATION_THEORIES)[number];
+import type { LocalizationTheory } from './localization-theories.js';
 
-export function isLocalizationTheory(name: string): name is LocalizationTheory {
-  return (LOCALIZATION_THEORIES as readonly string[]).includes(name);
-}
+export { LOCALIZATION_THEORIES, isLocalizationTheory, type LocalizationTheory } from './localization-theories.js';
 
 /** The letter of a theory's variables: t_m = e^{y_m} for equivariant K-theory, y_m otherwise. */
 export function localizationLetter(theory: LocalizationTheory): StripLetter {

@@ -1,5 +1,4 @@
 import type { CommandModule } from 'yargs';
-import { resolveTheory } from '../../claims/resolve-theory.js';
 import { getHeapStatistics } from 'node:v8';
 import { generatingSemiring, type ProgressCallback } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
@@ -10,12 +9,13 @@ import { classOptions, formOption } from '../class-options.js';
 import type { ValueForm } from '../../report/root-form.js';
 import { runCommand } from '../run-command.js';
 import { CodedError } from '../../errors/index.js';
-import { isLocalizationTheory, localizationLetter, localizationValue, type LocalizationTheory } from '../../run/localization-values.js';
+import { isLocalizationTheory, type LocalizationTheory } from '../../run/localization-theories.js';
+import { loadTheory } from '../load-theory.js';
 import { JSON_FORMAT_VERSION, valueJson } from '../../report/value-json.js';
 import type { RegionValue } from '../../claims/count-region.js';
 
 // Theories without a built-in puzzle rule: the structure constant of a triangle, computed by localization.
-function countByLocalization(theory: LocalizationTheory, args: CountArgs): void {
+async function countByLocalization(theory: LocalizationTheory, args: CountArgs): Promise<void> {
   const { triangle } = parseBoundary(args);
   if (!triangle || triangle.strings.length !== 3 || args.sides !== undefined || args.completed || args.statistic !== undefined) {
     throw new CodedError('invalid_argument', { what: `--theory ${theory}`, expected: 'a structure constant --triangle λ,μ,ν (or --partitions)', received: 'another boundary or option' }, {
@@ -25,6 +25,7 @@ function countByLocalization(theory: LocalizationTheory, args: CountArgs): void 
   }
   const [lambda, mu, nu] = triangle.strings as [string, string, string];
   const n = lambda.length;
+  const { localizationLetter, localizationValue } = await import('../../run/localization-values.js');
   const value: RegionValue = { type: 'fraction', value: localizationValue(theory, lambda, mu, nu), size: n, letter: localizationLetter(theory), variableNames: [] };
   if (args.json) {
     process.stdout.write(`${JSON.stringify({ formatVersion: JSON_FORMAT_VERSION, theory, ...triangleEchoJson(triangle), source: 'localization', puzzles: null, value: valueJson(value) })}\n`);
@@ -69,12 +70,12 @@ export const countCommand: CommandModule<object, CountArgs> = {
       .option('statistic', { type: 'string', describe: 'also count puzzles by their number of pieces of this kind (e.g. k-piece, equivariant)' })
       .option('json', { type: 'boolean', default: false, describe: 'print one JSON object' }) as never,
   handler: (args) =>
-    runCommand(args.json, () => {
+    runCommand(args.json, async () => {
       if (isLocalizationTheory(args.theory)) {
-        countByLocalization(args.theory, args);
+        await countByLocalization(args.theory, args);
         return;
       }
-      const pieces = resolveTheory(args.theory);
+      const pieces = await loadTheory(args.theory);
       const { sides, triangle } = parseBoundary(args);
       announceLargeRegion(regionOfSides(sides), `counting in ${pieces.name}`);
       // Half the heap: the engine stops with a coded error naming the limit instead of exhausting V8.
