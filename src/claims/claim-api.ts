@@ -78,6 +78,8 @@ export interface ClaimPlan {
   /** The index ↔ instance bijection inside a class; consecutive indices share sides 1–4 and 6 where possible. */
   instanceAt(cls: SizeClass, index: bigint): Instance;
   indexOf(cls: SizeClass, sides: readonly string[]): bigint | undefined;
+  /** Optional: shared memory for the class's value tables, when the claim is swept from tables and they fit. */
+  sharedTables?(cls: SizeClass): SharedTables | undefined;
   /** Optional: the instances start ≤ index < end in order, cheaper than one `instanceAt` each. */
   instancesFrom?(cls: SizeClass, start: bigint, end: bigint): Iterable<Instance>;
 }
@@ -92,13 +94,22 @@ export interface ScanTally {
   nonzero: number;
 }
 
+/** Memory shared by the workers sweeping one class: its value tables, each cell computed once (`family-scan.ts`). */
+export interface SharedTables {
+  /** Names this allocation, so a worker tells one run's tables from another's. */
+  readonly id: string;
+  readonly values: SharedArrayBuffer;
+  /** Per cell and part: 0 free, 1 being computed, 2 done, 3 not computable (Int32). */
+  readonly state: SharedArrayBuffer;
+}
+
 export interface Evaluator {
   /**
    * Optional bulk path: decides instances [start, end) of a class from value tables, adding to `tally`,
    * and hands every instance it does not decide (failures among them) to `fallback`, in index order.
    * False when it does not scan this class (nothing tallied).
    */
-  scan?(cls: SizeClass, start: bigint, end: bigint, tally: ScanTally, fallback: (index: bigint) => void): boolean;
+  scan?(cls: SizeClass, start: bigint, end: bigint, tally: ScanTally, fallback: (index: bigint) => void, tables?: SharedTables): boolean;
   /** Checks one instance; may use a cache of one-pass-for-all-completions sweeps keyed by partial boundary. */
   evaluate(instance: Instance): InstanceResult;
   /** Recomputes one instance with exact arithmetic only (used to confirm every counterexample). */

@@ -1,8 +1,9 @@
 import { countFamily, FAMILY_SIDE_ORDER, fillingCountSemiring, integerSemiring, makeRegion, type SafeInt, type Semiring } from '../engine/index.js';
-import type { ScanTally, SizeClass } from './claim-api.js';
+import type { ScanTally, SharedTables, SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
 import { rankString, unrankString } from './multiset-rank.js';
 import type { ClaimPlanExt, Layout } from './plan-claim.js';
+import { TABLE_PARTS, tableShape, type TableShape } from './shared-tables.js';
 import { applySideMap } from './side-map.js';
 
 /** The bulk path of a sweep: integer values of a whole class from value tables, compared by index arithmetic. */
@@ -12,7 +13,7 @@ export interface FamilyScanner {
    * not decide (a comparison that fails, a cell it cannot tabulate) goes to `fallback`, in index order.
    * False when the class is not scanned at all (then nothing was tallied).
    */
-  scan(cls: SizeClass, start: bigint, end: bigint, tally: ScanTally, fallback: (index: bigint) => void): boolean;
+  scan(cls: SizeClass, start: bigint, end: bigint, tally: ScanTally, fallback: (index: bigint) => void, tables?: SharedTables): boolean;
 }
 
 /** What the evaluator decided about pairing; the scan must answer exactly as the per-instance path. */
@@ -48,15 +49,34 @@ const CACHE_ENTRIES = 6_000_000;
 // A cell larger than this is left to the per-instance path.
 const MAX_CELL = 1 << 24;
 
-/** The bulk scanner of a claim, or undefined when its values are not integers compared for equality through a side map. */
-export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
-  const { program, plan, involutive, sameTheory } = setup;
+/** Whether a claim's sweeps can be decided from value tables: integer values compared for equality through a side map. */
+export function scannable(program: ClaimProgram): boolean {
   const measure = program.claim.compare.measure.type;
   const integer = measure === 'puzzles' || (measure === 'value' && !program.polynomial);
+  if (!integer || program.formula || !program.sideMap || program.claim.compare.relation.type !== 'equal' || program.relation.substitution || program.relation.searchSpace) return false;
+  return program.left.boundaryLabels.every((a) => a.length === 1);
+}
+
+// Views of one run's shared tables in this worker.
+interface SharedView {
+  readonly values: Float64Array;
+  readonly state: Int32Array;
+  readonly shape: TableShape;
+}
+
+// Waiting for a part another worker computes; past this, compute it here (that worker may have died).
+const PART_PATIENCE_MS = 10_000;
+// Entries per part of a shared table, at least.
+const PART_ENTRIES = 40_000;
+
+/** The bulk scanner of a claim, or undefined when it is not `scannable`. */
+export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
+  const { program, plan, involutive, sameTheory } = setup;
+  if (!scannable(program)) return undefined;
+  const measure = program.claim.compare.measure.type;
   const alphabet = program.left.boundaryLabels;
-  const sideMap = program.sideMap;
-  if (!integer || program.formula || !sideMap || program.claim.compare.relation.type !== 'equal' || program.relation.substitution || program.relation.searchSpace) return undefined;
-  if (!alphabet.every((a) => a.length === 1)) return undefined;
+  const sideMap = program.sideMap!;
+  const views = new Map<string, SharedView | undefined>();
   const semiring: Semiring<SafeInt> = measure === 'puzzles' ? fillingCountSemiring : integerSemiring;
   const nonzeroOnly = program.claim.family.nonzeroOnly;
   // Cells and their left tables, dropped together when the tables outgrow the budget.
@@ -72,9 +92,20 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     }
   };
 
-  const scan: FamilyScanner['scan'] = (cls, start, end, tally, fallback) => {
+  const scan: FamilyScanner['scan'] = (cls, start, end, tally, fallback, tables) => {
     const layout = plan.layoutOf(cls);
     if (layout.count > BigInt(Number.MAX_SAFE_INTEGER)) return false;
+    let shared: SharedView | undefined;
+    if (tables) {
+      const id = `${tables.id}|${cls.key}`;
+      if (!views.has(id)) {
+        const shape = tableShape(layout);
+        const fits = shape !== undefined && tables.values.byteLength >= shape.entries * 8 && tables.state.byteLength >= shape.cells * TABLE_PARTS * 4;
+        views.set(id, fits ? { values: new Float64Array(tables.values), state: new Int32Array(tables.state), shape } : undefined);
+      }
+      shared = views.get(id);
+    }
+    const cellKeyOf = (contents: readonly number[]) => contents.reduce((k, c, g) => k * layout.groups[g]!.contents.length + c, 0);
     // A group of one side reads its whole digit (content offset + rank) from one candidate list of every
     // content; only groups of several sides split the class into cells, one per content.
     const groups = layout.groups.map((g) => ({
@@ -85,10 +116,10 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       strings: g.contents.map((c) => Number(c.strings)),
     }));
     const leftOf = (contents: readonly number[]) => {
-      const key = `${cls.key}|${contents.join(',')}`;
+      const key = `${shared ? `${tables!.id}|` : ''}${cls.key}|${contents.join(',')}`;
       if (!lefts.has(key)) {
-        const t = leftTable(cls, layout, contents);
-        remember(t?.values.length ?? 0);
+        const t = shared ? sharedLeftTable(cls, layout, contents, shared, cellKeyOf(contents)) : leftTable(cls, layout, contents);
+        remember(shared ? 0 : (t?.values.length ?? 0));
         lefts.set(key, t);
       }
       return lefts.get(key);
@@ -263,6 +294,60 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     });
   }
 
+  // A cell's left table in shared memory: its parts (slices of the most significant side with several
+  // candidates) are claimed one by one, so workers needing the same cell split its work; then wait for the rest.
+  function sharedLeftTable(cls: SizeClass, layout: Layout, contents: readonly number[], view: SharedView, key: number): { values: Float64Array; stride: Float64Array } | undefined {
+    const candidates = candidatesOf(layout, contents);
+    const counts = candidates.map((l) => l.length);
+    const size = view.shape.sizes[key]!;
+    if (counts.reduce((p, n) => p * n, 1) !== size) return undefined;
+    const values = view.values.subarray(view.shape.offsets[key]!, view.shape.offsets[key]! + size);
+    // Cut along a side the top-down sweep reads first (sides 2 and 3 start at the top), so that the parts
+    // share no steps; a part of the table is then a strided set of blocks.
+    const split = [1, 2, 0, 3, 5].find((k) => counts[k]! > 1) ?? 1;
+    const n = counts[split]!;
+    // Enough parts for the workers to share a large cell, few enough that each costs far more than its set-up.
+    const parts = Math.max(1, Math.min(TABLE_PARTS, n, Math.floor(size / PART_ENTRIES)));
+    const per = Math.ceil(n / parts);
+    const at = FAMILY_SIDE_ORDER.indexOf(split as 0 | 1 | 2 | 3 | 4 | 5);
+    const outer = FAMILY_SIDE_ORDER.slice(0, at).reduce((q: number, k) => q * counts[k]!, 1);
+    const inner = FAMILY_SIDE_ORDER.slice(at + 1).reduce((q: number, k) => q * counts[k]!, 1);
+    const region = makeRegion(cls.lengths);
+    const compute = (p: number) =>
+      guarded(() => {
+        const lo = p * per;
+        const hi = Math.min(n, lo + per);
+        if (hi <= lo) return true;
+        const sub = candidates.slice();
+        sub[split] = candidates[split]!.slice(lo, hi);
+        const t = countFamily(region, sub, program.left, { semiring }).numbers;
+        if (!t) return undefined;
+        const block = (hi - lo) * inner;
+        for (let o = 0; o < outer; o++) values.set(t.subarray(o * block, o * block + block), (o * n + lo) * inner);
+        return true;
+      }) === true;
+    const base = key * TABLE_PARTS;
+    for (let p = 0; p < parts; p++) {
+      if (Atomics.compareExchange(view.state, base + p, 0, 1) !== 0) continue;
+      Atomics.store(view.state, base + p, compute(p) ? 2 : 3);
+      Atomics.notify(view.state, base + p);
+    }
+    for (let p = 0; p < parts; p++) {
+      const began = Date.now();
+      while (Atomics.load(view.state, base + p) === 1) {
+        if (Date.now() - began > PART_PATIENCE_MS) {
+          // Its worker is gone or stuck: the values are the same whoever writes them.
+          Atomics.store(view.state, base + p, compute(p) ? 2 : 3);
+          Atomics.notify(view.state, base + p);
+          break;
+        }
+        Atomics.wait(view.state, base + p, 1, 50);
+      }
+      if (Atomics.load(view.state, base + p) !== 2) return undefined;
+    }
+    return { values, stride: strides(counts) };
+  }
+
   function buildCell(cls: SizeClass, layout: Layout, contents: readonly number[], leftOf: (c: readonly number[]) => { values: Float64Array; stride: Float64Array } | undefined): Cell {
     const own = leftOf(contents);
     if (!own) return NOT_TABULATED;
@@ -279,8 +364,8 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     const candidates = candidatesOf(layout, contents);
     const leftStride = own.stride;
     // T(b) side j is side from_j of b, reversed and renamed: map each candidate once.
-    const images = sideMap!.map((s) => candidates[s.from]!.map((x) => applySideMap([{ ...s, from: 0 }], [cls.lengths[s.from]!], [x]).sides[0]!));
-    const lengths = sideMap!.map((s) => cls.lengths[s.from]!);
+    const images = sideMap.map((s) => candidates[s.from]!.map((x) => applySideMap([{ ...s, from: 0 }], [cls.lengths[s.from]!], [x]).sides[0]!));
+    const lengths = sideMap.map((s) => cls.lengths[s.from]!);
     const target = targetCell(layout, lengths, cls.lengths, images);
     const partnerCoef = new Float64Array(6);
     let partnerBase = 0;

@@ -1,7 +1,9 @@
 import { makeRegion } from '../engine/index.js';
 import { CodedError, toCodedError } from '../errors/index.js';
 import { evalAffine } from './affine.js';
-import type { ClaimPlan, Instance, SizeClass } from './claim-api.js';
+import type { ClaimPlan, Instance, SharedTables, SizeClass } from './claim-api.js';
+import { scannable } from './family-scan.js';
+import { allocateSharedTables, tableShape } from './shared-tables.js';
 import type { Claim } from './claim-schema.js';
 import { asProgram, type ClaimProgram } from './compile-claim-program.js';
 import type { CompiledClaim } from './compile-claim.js';
@@ -40,6 +42,7 @@ export interface ClaimPlanExt extends ClaimPlan {
   classForKey(key: string): SizeClass;
   /** How a class's index is built: groups of sides sharing a content, most significant first. */
   layoutOf(cls: SizeClass): Layout;
+  sharedTables(cls: SizeClass): SharedTables | undefined;
 }
 
 const NO_VARIABLES = 'all';
@@ -189,6 +192,11 @@ export function planClaim(claim: Claim | ClaimProgram): ClaimPlanExt {
     },
     instanceCount: (cls) => layout(cls).count,
     layoutOf: layout,
+    sharedTables(cls) {
+      if (!scannable(program)) return undefined;
+      const shape = tableShape(layout(cls));
+      return shape ? allocateSharedTables(`${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}`, shape) : undefined;
+    },
     instanceAt(cls, index) {
       const l = layout(cls);
       if (index < 0n || index >= l.count) throw outOfRange(cls, index);

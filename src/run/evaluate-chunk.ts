@@ -1,4 +1,4 @@
-import type { ClaimPlan, Evaluator, Instance, InstanceResult, SizeClass } from '../claims/claim-api.js';
+import type { ClaimPlan, Evaluator, Instance, InstanceResult, SharedTables, SizeClass } from '../claims/claim-api.js';
 import type { CounterexampleRecord } from '../store/index.js';
 import { intersectPermutations } from '../store/permutation-records.js';
 import type { ChunkResult } from './worker-task.js';
@@ -27,7 +27,7 @@ function* unranked(plan: ClaimPlan, cls: SizeClass, start: bigint, end: bigint):
  * met later as `paired`, adds nothing. A failing pair gives two counterexample rows, the partner's marked
  * `partnerOf`; both are recomputed exactly first. `keepPermutations`: also list each instance's permutation.
  */
-export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeClass, start: bigint, end: bigint, keepPermutations = true): ChunkResult {
+export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeClass, start: bigint, end: bigint, keepPermutations = true, tables?: SharedTables): ChunkResult {
   const began = performance.now();
   const out = { checked: 0, holds: 0, fails: 0, skippedZero: 0, paired: 0, overturned: 0, vacuous: 0, nonzero: 0, errorBound: 0, exact: true };
   const counterexamples: CounterexampleRecord[] = [];
@@ -84,7 +84,7 @@ export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeCl
     }
   };
   // The bulk path decides what holds from class value tables; each instance it leaves (failures) is evaluated one by one.
-  const scanned = evaluator.scan?.(cls, start, end, out, (index) => one(plan.instanceAt(cls, index))) ?? false;
+  const scanned = evaluator.scan?.(cls, start, end, out, (index) => one(plan.instanceAt(cls, index)), tables) ?? false;
   if (!scanned) {
     const instances: Iterable<Instance> = plan.instancesFrom ? plan.instancesFrom(cls, start, end) : unranked(plan, cls, start, end);
     for (const instance of instances) one(instance);

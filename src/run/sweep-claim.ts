@@ -1,4 +1,4 @@
-import type { ClaimPlan, SizeClass } from '../claims/claim-api.js';
+import type { ClaimPlan, SharedTables, SizeClass } from '../claims/claim-api.js';
 import { CodedError, toCodedError } from '../errors/index.js';
 import {
   ChunkLeaser,
@@ -117,9 +117,15 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
     const aborted = ctx.signal && !ctx.signal.aborted ? new Promise<void>((resolve) => ctx.signal!.addEventListener('abort', () => resolve(), { once: true })) : undefined;
     let fatal: CodedError | undefined;
 
+    // Value tables shared by the workers, one allocation per class (each cell is then computed once).
+    const tables = new Map<number, SharedTables | undefined>();
+    const tablesOf = (ci: number) => {
+      if (!tables.has(ci)) tables.set(ci, plan.sharedTables?.(classes[ci]!));
+      return tables.get(ci);
+    };
     const dispatch = async (ci: number, lease: LeasedChunk): Promise<void> => {
       const classKey = classes[ci]!.key;
-      const task: ChunkTask = { ...base, kind: 'chunk', classKey, start: lease.start, end: lease.end, attempt: 0 };
+      const task: ChunkTask = { ...base, kind: 'chunk', classKey, start: lease.start, end: lease.end, attempt: 0, tables: tablesOf(ci) };
       const what = `chunk ${classKey}:${lease.start}-${lease.end}`;
       const startedAt = Date.now();
       try {
@@ -174,6 +180,7 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
             leaser(ci).reload();
           }
           s.settled(ci, outcome, Date.now());
+          if (outcome !== 'reopen' && outcome !== 'peer') tables.delete(ci);
         }
         action = s.next(Date.now());
       }

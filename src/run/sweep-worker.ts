@@ -43,7 +43,7 @@ function maybeCrash(task: ChunkTask): void {
 
 function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
   const cls = sizeClass(l, task.classKey);
-  return evaluateChunk(l.runtime.plan, l.runtime.evaluator, cls, task.start, task.end, task.keepPermutations ?? false);
+  return evaluateChunk(l.runtime.plan, l.runtime.evaluator, cls, task.start, task.end, task.keepPermutations ?? false, task.tables);
 }
 
 function confirmAll(l: Loaded, task: ConfirmTask): WorkerReply {

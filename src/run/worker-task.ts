@@ -1,4 +1,4 @@
-import type { Measured } from '../claims/claim-api.js';
+import type { Measured, SharedTables } from '../claims/claim-api.js';
 import type { ChunkFindings } from '../store/index.js';
 import type { ErrorParts } from '../errors/index.js';
 
@@ -22,6 +22,8 @@ export interface ChunkTask extends TaskBase {
   readonly end: bigint;
   /** Store each instance's permutation too (default false); class-wide intersections are always kept. */
   readonly keepPermutations?: boolean | undefined;
+  /** The class's value tables in memory shared by all workers of this run (absent: each worker keeps its own). */
+  readonly tables?: SharedTables | undefined;
 }
 
 /** Re-check stored counterexamples exactly. */

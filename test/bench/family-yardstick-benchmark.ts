@@ -1,0 +1,120 @@
+/**
+ * Family sweeps through the whole pipeline (`puzzlesweep run` into a fresh store) against the Python
+ * yardstick (python-dp.py, standard library only; never a check value), whole processes measured side by
+ * side in one run: the 6×6 parallelogram family (853,776 labelings) against the batched Python family loop,
+ * the 2,744-labeling family against the plain Python loop, and 1 against 2 workers. Run alone with
+ * `npm run bench -- family-yardstick`.
+ */
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { loadavg, tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const here = dirname(fileURLToPath(import.meta.url));
+const root = join(here, '..', '..');
+const cli = join(root, 'dist', 'cli', 'main.js');
+const python = join(here, 'python-dp.py');
+
+interface Run {
+  wall: number;
+  cpu: number;
+  rssMB: number;
+  out: string;
+  status: number | null;
+}
+
+// One whole process under /usr/bin/time (wall, user + system of every thread, peak resident memory).
+function timed(cmd: string[], limit = 900): Run {
+  const r = spawnSync('/usr/bin/time', ['-f', 'TIME %e %U %S %M', 'timeout', String(limit), ...cmd], { encoding: 'utf8', maxBuffer: 1 << 28, cwd: root });
+  const line = (r.stderr.split('\n').find((l) => l.startsWith('TIME ')) ?? 'TIME 0 0 0 0').split(' ');
+  const [wall, user, sys, kb] = line.slice(1).map(Number) as [number, number, number, number];
+  return { wall, cpu: user + sys, rssMB: Math.round(kb / 1024), out: r.stdout, status: r.status };
+}
+
+// The median run by wall time (CPU and memory of that same run).
+function median(runs: Run[]): Run {
+  return [...runs].sort((a, b) => a.wall - b.wall)[Math.floor(runs.length / 2)]!;
+}
+
+const s = (x: number) => x.toFixed(2);
+const ratio = (a: number, b: number) => `${(a / Math.max(b, 0.01)).toFixed(1)}×`;
+
+function claim(dir: string, name: string, sides: (number | string)[], variables: { name: string; min: number; max: number }[]): string {
+  const file = join(dir, `${name}.json`);
+  writeFileSync(
+    file,
+    JSON.stringify({
+      id: name,
+      statement: 'Exchanging sides 1 and 4 keeps the cohomology value.',
+      theory: 'cohomology',
+      family: { sides, variables, conditions: [{ type: 'sameContent', sides: [1, 4] }, { type: 'sameContent', sides: [2, 5] }] },
+      transform: [{ type: 'exchange', sides: [1, 4] }],
+      compare: { measure: { type: 'value' }, relation: { type: 'equal' } },
+    }),
+  );
+  return file;
+}
+
+export default async function familyYardstickBenchmark(): Promise<string> {
+  const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-family-'));
+  const loads: string[] = [loadavg()[0]!.toFixed(1)];
+  try {
+    const six = claim(dir, 'six', [6, 6, 0, 6, 6, 0], []);
+    const small = claim(dir, 'small', ['a', 'b', 0, 'a', 'b', 0], [{ name: 'a', min: 1, max: 4 }, { name: 'b', min: 1, max: 3 }]);
+    const smallSpec: string[] = [];
+    for (let a = 1; a <= 4; a++) for (let b = 1; b <= 3; b++) smallSpec.push(`${a},${b},0,${a},${b},0`);
+    let n = 0;
+    const sweep = (file: string, workers: number) => {
+      const r = timed(['node', cli, 'run', file, '--workers', String(workers), '--db', join(dir, `store-${n++}.sqlite`), '--json']);
+      const c = r.status === 0 ? (JSON.parse(r.out) as { claims: { instancesChecked: number; holds: number }[] }).claims[0]! : undefined;
+      return { ...r, checked: c?.instancesChecked ?? 0, holds: c?.holds ?? 0 };
+    };
+    const reps = 3;
+    // Alternate 1 and 2 workers, so a change in the machine's load hits both alike.
+    const sixRuns: { 1: ReturnType<typeof sweep>[]; 2: ReturnType<typeof sweep>[] } = { 1: [], 2: [] };
+    for (let i = 0; i < reps; i++) for (const w of [1, 2] as const) sixRuns[w].push(sweep(six, w));
+    const six1 = median(sixRuns[1]);
+    const six2 = median(sixRuns[2]);
+    const sixEngine = median([0, 1, 2].map(() => timed(['node', join(here, 'family-case.mjs'), 'cohomology', '6,6,0,6,6,0', '1', '4'])));
+    const bare = median([0, 1, 2, 3, 4].map(() => timed(['node', '-e', '0'])));
+    loads.push(loadavg()[0]!.toFixed(1));
+    const sixPy = timed(['python3', python, 'family', 'cohomology', '6,6,0,6,6,0', '1', '4']);
+    loads.push(loadavg()[0]!.toFixed(1));
+    const smallRuns: { 1: ReturnType<typeof sweep>[]; 2: ReturnType<typeof sweep>[] } = { 1: [], 2: [] };
+    for (let i = 0; i < 5; i++) for (const w of [1, 2] as const) smallRuns[w].push(sweep(small, w));
+    const small1 = median(smallRuns[1]);
+    const small2 = median(smallRuns[2]);
+    const smallPlain = median([0, 1, 2].map(() => timed(['python3', python, 'plain', 'cohomology', smallSpec.join(';'), '1', '4'])));
+    const smallBatched = median([0, 1, 2].map(() => timed(['python3', python, 'family', 'cohomology', smallSpec.join(';'), '1', '4'])));
+    loads.push(loadavg()[0]!.toFixed(1));
+    const pyChecked = (r: Run) => (r.out ? (JSON.parse(r.out) as { checked: number }).checked : 0);
+
+    const lines = [
+      '## Family sweeps against the Python yardstick (test/bench/family-yardstick-benchmark.ts)',
+      '',
+      `Whole processes under \`/usr/bin/time\`, same run; CPU = user + system of every thread; peak = maximum resident set. \`run\` sweeps into a fresh store (\`--json\`); runs of \`run\` are medians of ${reps} (6×6) or 5 (2,744), 1 and 2 workers alternating. Load average (1 min) at the start, after the 6×6 runs, after Python and at the end: ${loads.join(', ')} on 2 cores.`,
+      'Claim: "exchanging sides 1 and 4 keeps the cohomology value", sides 1, 4 and sides 2, 5 of equal content. Python: `python-dp.py family` (batched: one open-bottom DP per top part) and `python-dp.py plain` (one closed DP for b and one for T(b) per labeling).',
+      '',
+      '| case | labelings | holds | wall s | CPU s | peak MB |',
+      '|---|---:|---:|---:|---:|---:|',
+      `| 6×6: \`run\`, 1 worker | ${six1.checked} | ${six1.holds} | ${s(six1.wall)} | ${s(six1.cpu)} | ${six1.rssMB} |`,
+      `| 6×6: \`run\`, 2 workers | ${six2.checked} | ${six2.holds} | ${s(six2.wall)} | ${s(six2.cpu)} | ${six2.rssMB} |`,
+      `| 6×6: engine tables alone (\`family-case.mjs\`, no store, no workers) | ${pyChecked(sixEngine)} | | ${s(sixEngine.wall)} | ${s(sixEngine.cpu)} | ${sixEngine.rssMB} |`,
+      `| 6×6: Python, batched family loop | ${pyChecked(sixPy)} | | ${s(sixPy.wall)} | ${s(sixPy.cpu)} | ${sixPy.rssMB} |`,
+      `| 2,744: \`run\`, 1 worker | ${small1.checked} | ${small1.holds} | ${s(small1.wall)} | ${s(small1.cpu)} | ${small1.rssMB} |`,
+      `| 2,744: \`run\`, 2 workers | ${small2.checked} | ${small2.holds} | ${s(small2.wall)} | ${s(small2.cpu)} | ${small2.rssMB} |`,
+      `| 2,744: Python, plain loop | ${pyChecked(smallPlain)} | | ${s(smallPlain.wall)} | ${s(smallPlain.cpu)} | ${smallPlain.rssMB} |`,
+      `| 2,744: Python, batched family loop | ${pyChecked(smallBatched)} | | ${s(smallBatched.wall)} | ${s(smallBatched.cpu)} | ${smallBatched.rssMB} |`,
+      `| \`node -e 0\` | | | ${s(bare.wall)} | ${s(bare.cpu)} | ${bare.rssMB} |`,
+      '',
+      `- 6×6, \`run\` (1 worker) against the batched Python loop: ${ratio(sixPy.cpu, six1.cpu)} in CPU, ${ratio(sixPy.wall, six1.wall)} in wall time (goal ≥ 10×); peak ${six1.rssMB} MB with 1 worker, ${six2.rssMB} MB with 2 (goal ≤ 300 MB).`,
+      `- 2 workers against 1 on the 6×6 sweep: ${ratio(six1.wall, six2.wall)} in wall time (goal ≥ 1.8×); CPU ${s(six1.cpu)} s against ${s(six2.cpu)} s. Wall times of the ${reps} runs, 1 worker: ${sixRuns[1].map((r) => s(r.wall)).join(', ')}; 2 workers: ${sixRuns[2].map((r) => s(r.wall)).join(', ')}.`,
+      `- 2,744, \`run\` (1 worker) against the plain Python loop: ${ratio(smallPlain.cpu, small1.cpu)} in CPU, ${ratio(smallPlain.wall, small1.wall)} in wall time (goal ≥ 3×, well under a second); against the batched loop ${ratio(smallBatched.cpu, small1.cpu)} in CPU.`,
+      `- Where the 6×6 sweep's CPU goes: a bare Node process ${s(bare.cpu)} s; the engine's tables for the whole family with Node's start (\`family-case.mjs\`) ${s(sixEngine.cpu)} s; \`run\` adds the CLI, the claim's compilation, the store and a worker thread that loads the claims and engine modules itself: ${s(six1.cpu - sixEngine.cpu)} s more.`,
+    ];
+    return lines.join('\n');
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
