@@ -33,7 +33,7 @@ function timed(cmd: string[], limit = 900): Run {
 }
 
 // The median run by wall time (CPU and memory of that same run).
-function median(runs: Run[]): Run {
+function median<R extends Run>(runs: R[]): R {
   return [...runs].sort((a, b) => a.wall - b.wall)[Math.floor(runs.length / 2)]!;
 }
 
