@@ -1,11 +1,17 @@
 #!/usr/bin/env node
 import { readFileSync } from 'node:fs';
+import type { Argv } from 'yargs';
 import { joinDashValues } from './dash-values.js';
 import { COMMANDS, invokedCommand } from './command-registry.js';
+import { commandLineError, type CommandLineSpec } from './command-line-check.js';
+import { reportError } from './run-command.js';
+import { CodedError } from '../errors/index.js';
 
 // process.argv minus node and the script (what yargs' hideBin does for a plain Node process; importing
 // yargs/helpers alone cost ~90 ms).
 const argv = joinDashValues(process.argv.slice(2));
+const json = argv.includes('--json');
+const asksHelp = argv.includes('--help') || argv.includes('-h') || argv.includes('--version');
 
 /** Set to render `--help` with yargs even when the build's copy of it exists (the build sets it to make that copy). */
 const RENDER_HELP_ENV = 'PUZZLESWEEP_RENDER_HELP';
@@ -24,26 +30,30 @@ function builtHelp(): string | undefined {
   }
 }
 
-// yargs sums a repeated number flag and collects a repeated string flag into an array; a flag that takes
-// one value is refused when given twice. Runs once the invoked command has declared its options.
-function refuseRepeatedFlags(_args: unknown, y: { getOptions(): { array?: string[] } }): void {
-  const repeatable = new Set(y.getOptions().array ?? []);
-  const seen = new Map<string, number>();
-  for (const token of argv) {
-    if (token === '--') break;
-    const m = /^--([a-z][a-z0-9-]*)(=|$)/.exec(token);
-    if (m && !repeatable.has(m[1]!)) seen.set(m[1]!, (seen.get(m[1]!) ?? 0) + 1);
-  }
-  for (const [flag, times] of seen) {
-    if (times < 2) continue;
-    process.stderr.write(`✖ Option --${flag}: expected one value, received ${times}\n  → at --${flag}\n  Hint: give --${flag} once\n  [invalid_argument]\n`);
-    process.exit(2);
-  }
+interface DeclaredOptions {
+  getOptions(): { key: Record<string, unknown>; alias: Record<string, string[]>; boolean: string[]; number: string[]; array: string[]; choices: Record<string, unknown[]> };
+  getDemandedOptions(): Record<string, unknown>;
+}
+
+const names = COMMANDS.map((c) => c.name);
+const invoked = invokedCommand(argv);
+// Filled once the invoked command's builder has declared its options, before yargs validates anything.
+let spec: CommandLineSpec | undefined;
+
+function refuse(e: CodedError): never {
+  process.exit(reportError(e, json));
+}
+
+// Our own check of the declared options runs before yargs' validation, so a refusal carries a catalogue
+// code and names the flag, whatever yargs' wording; yargs' checks stay as a backstop, coded too (`fail`).
+function checkCommandLine(): void {
+  const e = commandLineError(argv, names, invoked, spec);
+  if (e) refuse(e);
 }
 
 async function parse(): Promise<void> {
+  if ((invoked === undefined || !names.includes(invoked)) && !asksHelp) checkCommandLine();
   const { default: yargs } = await import('yargs');
-  const invoked = invokedCommand(argv);
   const cli = yargs(argv).scriptName('puzzlesweep');
   // yargs renders the invoked command's whole help after starting its handler, only to show it should the
   // handler fail; our .fail never shows help, and that rendering (string widths of every line) cost 25–60 ms
@@ -51,17 +61,39 @@ async function parse(): Promise<void> {
   (cli as unknown as { getInternalMethods(): { getUsageInstance(): { cacheHelpMessage(): void } } }).getInternalMethods().getUsageInstance().cacheHelpMessage = () => {};
   // The invoked command is loaded in full; every other one is listed by name and description only.
   for (const c of COMMANDS) {
-    if (c.name === invoked) cli.command(await c.load());
-    else cli.command(c.command, c.describe, () => {}, () => {});
+    if (c.name !== invoked) {
+      cli.command(c.command, c.describe, () => {}, () => {});
+      continue;
+    }
+    const module = await c.load();
+    const builder = module.builder;
+    cli.command({
+      ...module,
+      builder: (y: Argv) => {
+        const built = (typeof builder === 'function' ? builder(y as never) : y.options(builder ?? {})) as unknown as DeclaredOptions;
+        const o = built.getOptions();
+        spec = {
+          usage: c.command,
+          keys: Object.keys(o.key),
+          aliases: o.alias,
+          booleans: o.boolean,
+          numbers: o.number,
+          arrays: o.array,
+          choices: o.choices,
+          demanded: Object.keys(built.getDemandedOptions()),
+        };
+        if (!asksHelp) checkCommandLine();
+        return built as never;
+      },
+    } as never);
   }
   await cli
-    .demandCommand(1, 'Command: expected one of the commands listed above, received none')
+    .demandCommand(1)
     .strict()
-    .middleware(refuseRepeatedFlags as never)
     .fail((msg, err) => {
       if (err) throw err;
-      process.stderr.write(`✖ ${msg}\n  Hint: run 'puzzlesweep --help'\n  [invalid_argument]\n`);
-      process.exit(2);
+      // yargs refused something our check let through: its own words become the `received` part.
+      refuse(commandLineError(argv, names, invoked, spec) ?? new CodedError('invalid_command_line', { what: 'Command line', expected: "arguments the command takes (see 'puzzlesweep --help')", received: msg }));
     })
     .help()
     .parseAsync();

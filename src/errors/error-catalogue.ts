@@ -97,11 +97,17 @@ export const ERROR_CATALOGUE = {
     parts: (p: { readonly received: string; readonly command: string }) => ({ what: 'Argument', expected: `no further arguments to '${p.command}'`, received: quoted(p.received) }),
     hint: () => 'values go after their flag, e.g. --theory equivariant',
   } satisfies CodeSpec<{ received: string; command: string }>,
+  missing_argument: {
+    kind: 'input',
+    means: 'a required positional argument is missing',
+    parts: (p: { readonly name: string; readonly usage: string }) => ({ what: `Argument <${p.name}>`, expected: `a value (puzzlesweep ${p.usage})`, received: 'nothing' }),
+  } satisfies CodeSpec<{ name: string; usage: string }>,
   missing_option: {
     kind: 'input',
     means: 'a required flag or argument is missing',
-    parts: (p: { readonly flag: string; readonly describe?: string }) => ({ what: `Option ${flagText(p.flag)}`, expected: p.describe ? `a value (${p.describe})` : 'a value', received: 'nothing' }),
-  } satisfies CodeSpec<{ flag: string; describe?: string }>,
+    parts: (p: { readonly flag: string; readonly command: string }) => ({ what: `Option ${flagText(p.flag)}`, expected: `a value (required by '${p.command}')`, received: 'nothing' }),
+    hint: (p) => `run 'puzzlesweep ${p.command} --help' for its options`,
+  } satisfies CodeSpec<{ flag: string; command: string }>,
   invalid_choice: {
     kind: 'input',
     means: 'a flag value outside its list of choices',
