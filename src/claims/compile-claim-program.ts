@@ -1,6 +1,7 @@
 import { claimSchema, type Claim } from './claim-schema.js';
 import { claimZodError } from './claim-zod-error.js';
 import { parseMarked } from './zod-issue.js';
+import { claimCompileCounts } from './compile-counts.js';
 import { canonicalClaimJson, claimFingerprint, ENGINE_VERSION } from './claim-fingerprint.js';
 import { compileClaim, type CompiledClaim } from './compile-claim.js';
 import { measureDef } from './measures/measure-registry.js';
@@ -39,17 +40,22 @@ export interface ClaimProgram extends CompiledClaim {
 
 /** The only compile: claim JSON (as read) to a typed program; every error is coded with its JSON path. */
 export function compileClaimProgram(json: unknown, file?: string, max?: Readonly<Record<string, number>>): ClaimProgram {
+  claimCompileCounts.parses++;
   const parsed = parseMarked(claimSchema, json);
   if (!parsed.success) throw claimZodError(parsed.error, json, file);
   return programOf(parsed.data, json, file, max);
 }
 
-function programOf(claim: Claim, source: unknown, file: string | undefined, max: Readonly<Record<string, number>> | undefined): ClaimProgram {
+const boundsKey = (max: Readonly<Record<string, number>> | undefined) => JSON.stringify(Object.entries(max ?? {}).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));
+
+// The programs of one parsed claim under different bounds share a cache: each bound set compiles once.
+function programOf(claim: Claim, source: unknown, file: string | undefined, max: Readonly<Record<string, number>> | undefined, programs = new Map<string, ClaimProgram>()): ClaimProgram {
+  claimCompileCounts.compiles++;
   const compiled = compileClaim(claim, file, max && Object.keys(max).length ? max : undefined);
   const relation = relationDef(claim.compare.relation);
   const sideMap = transformSideMap(claim.transform);
   const names = [...new Set([compiled.left, compiled.right].flatMap((p) => p.pieces.flatMap((q) => (q.weight.type === 'variable' ? [q.weight.name] : []))))].sort();
-  return {
+  const program: ClaimProgram = {
     ...compiled,
     source,
     file,
@@ -63,8 +69,10 @@ function programOf(claim: Claim, source: unknown, file: string | undefined, max:
     relationVariables: relation.variables(claim.compare.relation).filter((v) => compiled.variables.some((w) => w.name === v)),
     names,
     transformText: claim.transform.map((s) => stepDef(s).text(s)).join(', then ') || 'identity',
-    withBounds: (m) => programOf(claim, source, file, m),
+    withBounds: (m) => programs.get(boundsKey(m)) ?? programOf(claim, source, file, m, programs),
   };
+  programs.set(boundsKey(max), program);
+  return program;
 }
 
 /** A program as is, or a parsed claim compiled (for callers that still hold a `Claim`). */

@@ -10,3 +10,4 @@ export { planClaim, type ClaimPlanExt } from './plan-claim.js';
 export { applyTransform } from './boundary-transform.js';
 export { createEvaluator, type EvaluatorTuning } from './create-evaluator.js';
 export { inferPermutationRule, type PermutationRule, type ClassPermutations } from './permutation-rule.js';
+export { claimCompileCounts } from './compile-counts.js';

@@ -1,4 +1,5 @@
 import type { ClaimPlan, EvaluateOptions, Evaluator } from '../claims/claim-api.js';
+import type { ClaimProgram } from '../claims/compile-claim-program.js';
 
 /** A claim ready to sweep: its plan (classes, index ↔ instance) and an evaluator with its caches. */
 export interface ClaimRuntime {
@@ -8,7 +9,8 @@ export interface ClaimRuntime {
 
 /** The shape of a module that turns a claim's canonical JSON into a runtime (the real one or a test double). */
 export interface ClaimRuntimeModule {
-  createClaimRuntime(canonicalJson: string, options: EvaluateOptions): ClaimRuntime;
+  /** `max`: the run's raised bounds, compiled in from the start (one compile per worker). */
+  createClaimRuntime(canonicalJson: string, options: EvaluateOptions, max?: Readonly<Record<string, number>>): ClaimRuntime;
 }
 
 /** A claim as the runner receives it: already validated, canonical and fingerprinted by the claims layer. */
@@ -21,6 +23,8 @@ export interface SweepClaim {
   readonly sourceJson?: string | undefined;
   /** The claim file it came from, for replay commands. */
   readonly file?: string | undefined;
+  /** The program the claims layer compiled when loading the file (reused, not compiled again). */
+  readonly program?: ClaimProgram | undefined;
 }
 
 /** Imports a runtime module by URL and checks it has the expected export. */

@@ -38,7 +38,7 @@ export async function runSweep(input: SweepInput): Promise<SweepSummary> {
   const plans: ClaimPlan[] = [];
   if (input.runtimeModule === undefined) {
     for (const claim of input.claims) {
-      const program = compileClaimProgram(JSON.parse(claim.canonicalJson) as unknown, claim.file);
+      const program = claim.program ?? compileClaimProgram(JSON.parse(claim.canonicalJson) as unknown, claim.file);
       checkFamilyBounds(program, options.max);
       const plan = planClaim(program);
       checkInstanceCount(plan, options.max);

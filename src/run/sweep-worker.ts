@@ -1,4 +1,9 @@
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { threadId } from 'node:worker_threads';
 import type { SizeClass } from '../claims/claim-api.js';
+import { claimCompileCounts } from '../claims/compile-counts.js';
+import { CodedError } from '../errors/index.js';
 import { evaluateChunk } from './evaluate-chunk.js';
 import { importClaimRuntime, type ClaimRuntime } from './claim-runtime-module.js';
 import { serializeError } from './serialize-error.js';
@@ -18,7 +23,7 @@ function load(task: WorkerTask): Promise<Loaded> {
   let entry = loaded.get(key);
   if (!entry) {
     entry = importClaimRuntime(module).then((m) => {
-      const runtime = m.createClaimRuntime(task.canonicalJson, { exact: task.exact });
+      const runtime = m.createClaimRuntime(task.canonicalJson, { exact: task.exact }, task.max);
       const classes = new Map(runtime.plan.classes(task.max).map((c) => [c.key, c]));
       return { runtime, classes };
     });
@@ -29,7 +34,7 @@ function load(task: WorkerTask): Promise<Loaded> {
 
 function sizeClass(l: Loaded, key: string): SizeClass {
   const cls = l.classes.get(key);
-  if (!cls) throw Object.assign(new Error(`Side-length class: expected one of the plan's classes, received '${key}'`), { code: 'internal_error' });
+  if (!cls) throw new CodedError('internal_error', { what: 'Side-length class', expected: "one of the plan's classes", received: `'${key}'` });
   return cls;
 }
 
@@ -55,6 +60,13 @@ function confirmAll(l: Loaded, task: ConfirmTask): WorkerReply {
   return { ok: true, confirmed };
 }
 
+// Test hook: PUZZLESWEEP_TEST_COMPILE_COUNTS=<folder> writes this thread's claim parse and compile counts
+// there after every task, so a test can check that each worker compiles its claim once.
+function recordCompileCounts(): void {
+  const folder = process.env.PUZZLESWEEP_TEST_COMPILE_COUNTS;
+  if (folder) writeFileSync(join(folder, `worker-${threadId}.json`), JSON.stringify(claimCompileCounts));
+}
+
 /** Piscina entry: sweeps one chunk or re-checks counterexamples; errors come back as data with code and stack. */
 export default async function runWorkerTask(task: WorkerTask): Promise<WorkerReply> {
   try {
@@ -64,5 +76,7 @@ export default async function runWorkerTask(task: WorkerTask): Promise<WorkerRep
     return { ok: true, chunk: sweepChunk(l, task) };
   } catch (e) {
     return { ok: false, error: serializeError(e) };
+  } finally {
+    recordCompileCounts();
   }
 }
