@@ -33,8 +33,8 @@ describe('CLI start-up shortcuts keep the output', () => {
     expect(help.stdout).toContain('--theory');
     const bad = cli(['count', '--theory', 'cohomology', '--triangle', '0101,0110,1001', '--no-such-flag']);
     expect(bad.status).toBe(2);
-    expect(bad.stderr).toContain('Unknown argument');
-    expect(bad.stderr).toContain('[invalid_argument]');
+    expect(bad.stderr).toContain("✖ Option: expected an option of 'count', received '--no-such-flag'\n  → at --no-such-flag");
+    expect(bad.stderr).toContain('[unknown_option]');
     expect(bad.stderr).not.toContain('Options:');
   });
 
