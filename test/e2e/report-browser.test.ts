@@ -8,6 +8,7 @@ import { countBoundary, fillingCountSemiring, makeRegion, theoryPieceSet } from 
 import { renderHtmlReport } from '../../src/report/html-report.js';
 import type { ReportBoundary } from '../../src/report/report-data.js';
 import { reportFixture } from '../fixtures/report-fixture.js';
+import { cli } from './cli-process.js';
 
 const CHROMIUM = '/usr/bin/chromium';
 const present = existsSync(CHROMIUM);
@@ -54,6 +55,33 @@ describe('HTML report in a real browser', () => {
       mkdirSync('test-artifacts', { recursive: true });
       await page.setViewportSize({ width: 1280, height: 1600 });
       await page.screenshot({ path: join('test-artifacts', 'report-browser.png'), fullPage: false });
+    } finally {
+      await context.close();
+    }
+  });
+
+  it.skipIf(!present)('a report after run --max shows the raised classes beside the claim file\'s own (issue 7)', async () => {
+    const db = join(work, 'raised.sqlite');
+    const claim = 'conjectures/cohomology-triangle-mirror-complement.json'; // n from 1 to 4 in the file
+    expect(cli(['run', claim, '--db', db, '--workers', '1']).status).toBe(0);
+    expect(cli(['run', claim, '--db', db, '--workers', '1', '--max', 'n=5']).status).toBe(0);
+    const file = join(work, 'raised.html');
+    expect(cli(['report', claim, '--db', db, '--out', file]).status).toBe(0);
+    const context = await chromium.launchPersistentContext(join(work, 'profile-raised'), { executablePath: CHROMIUM, args: ARGS, headless: true });
+    try {
+      const page = await context.newPage();
+      await page.goto(pathToFileURL(file).href, { waitUntil: 'load' });
+      const rows = await page.$$eval('tr[data-class]', (trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')));
+      // Every boundary of the triangle (n,0,n,0,n,0) labels three sides of n edges by 0/1: 2^(3n) = 8^n
+      // instances (counting labelings, common practice, no source); all of them were checked.
+      expect(rows.map((r) => r[0])).toEqual(['n=1', 'n=2', 'n=3', 'n=4', 'n=5']);
+      for (const [n, r] of rows.entries()) {
+        const instances = String(8 ** (n + 1));
+        expect(r[2]!.replace(/\D/g, ''), r[0]).toBe(instances);
+        expect(r[3]!.replace(/\D/g, ''), r[0]).toBe(instances);
+        expect(r[8], r[0]).toMatch(/^verified/);
+      }
+      expect(await page.locator('[data-bar="n=5"]').count()).toBe(1);
     } finally {
       await context.close();
     }
