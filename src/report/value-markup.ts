@@ -4,8 +4,9 @@ export interface ValueSegment {
   readonly place: 'base' | 'sub' | 'sup';
 }
 
-// Variable names end in their index (`y12`), exponents follow `^`, products are written `*`.
-const TOKEN = /([A-Za-z]+)(\d+)|\^(\d+)|(\*)|(-)|([^A-Za-z^*-]+|[A-Za-z]+|\^)/g;
+// Variable names end in their index (`y12`), exponents follow `^` (negative ones in Laurent values, `t3^-1`),
+// products are written `*`.
+const TOKEN = /([A-Za-z]+)(\d+)|\^(-?\d+)|(\*)|(-)|([^A-Za-z^*-]+|[A-Za-z]+|\^)/g;
 
 /** Splits a value text such as `2*y1*y3^2 - y2` into baseline, index and exponent runs. */
 export function valueSegments(text: string): ValueSegment[] {
@@ -19,7 +20,7 @@ export function valueSegments(text: string): ValueSegment[] {
     if (m[1] !== undefined) {
       push(m[1], 'base');
       push(m[2]!, 'sub');
-    } else if (m[3] !== undefined) push(m[3], 'sup');
+    } else if (m[3] !== undefined) push(m[3].replace('-', '\u2212'), 'sup');
     else if (m[4] !== undefined) continue; // juxtaposition reads as a product
     else if (m[5] !== undefined) push('\u2212', 'base');
     else push(m[6]!, 'base');

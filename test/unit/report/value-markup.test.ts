@@ -15,6 +15,11 @@ describe('value markup', () => {
     ]);
   });
 
+  it('raises a negative exponent of a Laurent value whole, minus included', () => {
+    expect(valueHtml('-t1*t3^-1 + 1')).toBe('\u2212t<sub>1</sub>t<sub>3</sub><sup>\u22121</sup> + 1');
+    expect(valueTex('t2*t3^-2')).toBe('t_{2}t_{3}^{-2}');
+  });
+
   it('writes HTML with <sub> and <sup> and escapes the five XML specials', () => {
     expect(valueHtml('y12^3 - 1')).toBe('y<sub>12</sub><sup>3</sup> \u2212 1');
     expect(escapeXml(`<a & "b" 'c'>`)).toBe('&lt;a &amp; &quot;b&quot; &#39;c&#39;&gt;');
