@@ -1,7 +1,9 @@
 import {
   DEFAULT_PRIMES,
+  constantPoly,
   fractionDenominator,
   fractionEquals,
+  fractionOf,
   fractionTerms,
   fractionText,
   generatingSemiring,
@@ -39,7 +41,12 @@ export function equalValues(a: Value, b: Value): boolean {
   if (a.kind === 'int' && b.kind === 'int') return toBigInt(a.v) === toBigInt(b.v);
   if (a.kind === 'gen' && b.kind === 'gen') return generatingSemiring.equals(a.v, b.v);
   if (a.kind === 'poly' && b.kind === 'poly') return polyEquals(a.v, b.v);
-  if (a.kind === 'frac' && b.kind === 'frac') return fractionEquals(a.v, b.v);
+  if (a.kind === 'frac' || b.kind === 'frac') {
+    // A formula side with no nonzero term is the integer or polynomial 0 beside quotient values.
+    const asFraction = (x: Value): Fraction | undefined => (x.kind === 'frac' ? x.v : x.kind === 'poly' ? fractionOf(x.v) : x.kind === 'int' ? fractionOf(constantPoly(toBigInt(x.v))) : undefined);
+    const [fa, fb] = [asFraction(a), asFraction(b)];
+    return fa !== undefined && fb !== undefined && fractionEquals(fa, fb);
+  }
   if (a.kind === 'mod' && b.kind === 'mod') return a.v.every((r, k) => r === b.v[k]);
   return false;
 }

@@ -1,4 +1,4 @@
-import { isBuiltinTheory, makeRegion, theoryPieceSet, valueRing, type PieceSet } from '../engine/index.js';
+import { isBuiltinTheory, makeRegion, theoryPieceSet, type PieceSet } from '../engine/index.js';
 import { CodedError, toCodedError } from '../errors/index.js';
 import { addAffine, atValues, boxCorners, boxPoints, evalAffine, isParseError, parseAffine, valuesText, type Affine, type ExpressionInput, type Ranges } from './affine.js';
 import type { CheckContext, Fail, Where } from './compile-context.js';
@@ -59,17 +59,6 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const fail = failer(file);
   const left = resolve(claim.theory, 'theory', file, fail);
   const right = claim.compare.rightTheory === undefined ? left : resolve(claim.compare.rightTheory, 'compare.rightTheory', file, fail);
-  // Quotient values (Laurent polynomials, rational functions) are compared exactly or at random points, but a
-  // `compare.formula` adds and multiplies polynomials only.
-  for (const [pieces, path] of [[left, 'theory'], [right, 'compare.rightTheory']] as const) {
-    if (claim.compare.formula !== undefined && claim.compare.measure.type === 'value' && valueRing(pieces).kind === 'fraction') {
-      fail(
-        { what: 'Formula sides', expected: 'integer or polynomial values', received: `quotients (piece set '${pieces.name}' has weight formulas in t or with '/')` },
-        path,
-        "compare such values with a transform and a relation ('equal', 'equalAfterSubstitution', …) instead of compare.formula",
-      );
-    }
-  }
   const alphabet = [...left.boundaryLabels].sort().join(' ');
   if ([...right.boundaryLabels].sort().join(' ') !== alphabet) {
     fail({ what: 'Right-hand theory labels', expected: `the boundary labels of the claim theory (${alphabet})`, received: `${[...right.boundaryLabels].join(' ')}` }, 'compare.rightTheory');

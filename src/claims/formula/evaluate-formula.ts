@@ -1,32 +1,40 @@
-import { addInt, addPoly, constantPoly, isZeroInt, mulInt, mulPoly, toBigInt, type Polynomial, type SafeInt } from '../../engine/index.js';
+import { addFraction, addInt, addPoly, constantPoly, fractionOf, isZeroInt, mulFraction, mulInt, mulPoly, toBigInt, type Fraction, type Polynomial, type SafeInt, type StripLetter } from '../../engine/index.js';
 import type { Value } from '../measure.js';
 import { nextString } from '../multiset-rank.js';
 import type { CompiledBinder, CompiledTerm } from './compile-formula.js';
 import type { StringEnv } from './string-expr.js';
 
-/** The value of one boundary in one theory (exact: integers or polynomials). */
+/** The value of one boundary in one theory (exact: integers, polynomials or quotients). */
 export type ValueOf = (theory: string, lengths: readonly number[], sides: readonly string[]) => Value;
 
 /** Every labeling of side 5 with its value, the other sides as given (one open-side-5 sweep). */
 export type Side5Of = (theory: string, lengths: readonly number[], sides: readonly string[]) => readonly (readonly [string, Value])[];
 
-type Exact = { kind: 'int'; v: SafeInt } | { kind: 'poly'; v: Polynomial };
+type Exact = { kind: 'int'; v: SafeInt } | { kind: 'poly'; v: Polynomial } | { kind: 'frac'; v: Fraction; letter: StripLetter };
 
-const asPoly = (x: Exact): Polynomial => (x.kind === 'poly' ? x.v : constantPoly(toBigInt(x.v)));
-const isZero = (x: Exact) => (x.kind === 'int' ? isZeroInt(x.v) : x.v.size === 0);
+const asPoly = (x: Exact): Polynomial => (x.kind === 'poly' ? x.v : x.kind === 'int' ? constantPoly(toBigInt(x.v)) : x.v.num);
+const asFraction = (x: Exact): Fraction => (x.kind === 'frac' ? x.v : fractionOf(asPoly(x)));
+const isZero = (x: Exact) => (x.kind === 'int' ? isZeroInt(x.v) : x.kind === 'poly' ? x.v.size === 0 : x.v.num.size === 0);
 
 function exact(v: Value): Exact {
-  if (v.kind === 'int' || v.kind === 'poly') return v;
-  throw new Error(`formula values are exact integers or polynomials, received a ${v.kind} value`);
+  if (v.kind === 'int' || v.kind === 'poly' || v.kind === 'frac') return v;
+  throw new Error(`formula values are exact integers, polynomials or quotients, received a ${v.kind} value`);
 }
+
+// Quotients (Laurent values of equivariant K-theory, rational functions) absorb integers and polynomials.
+const letterOf = (a: Exact, b: Exact): StripLetter | undefined => (a.kind === 'frac' ? a.letter : b.kind === 'frac' ? b.letter : undefined);
 
 function add(a: Exact, b: Exact): Exact {
   if (a.kind === 'int' && b.kind === 'int') return { kind: 'int', v: addInt(a.v, b.v) };
+  const letter = letterOf(a, b);
+  if (letter) return { kind: 'frac', v: addFraction(asFraction(a), asFraction(b)), letter };
   return { kind: 'poly', v: addPoly(asPoly(a), asPoly(b)) };
 }
 
 function mul(a: Exact, b: Exact): Exact {
   if (a.kind === 'int' && b.kind === 'int') return { kind: 'int', v: mulInt(a.v, b.v) };
+  const letter = letterOf(a, b);
+  if (letter) return { kind: 'frac', v: mulFraction(asFraction(a), asFraction(b)), letter };
   return { kind: 'poly', v: mulPoly(asPoly(a), asPoly(b)) };
 }
 

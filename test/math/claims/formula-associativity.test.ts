@@ -40,6 +40,15 @@ describe('formula claims: associativity of the structure constants', () => {
     });
   }
 
+  it('holds on every Gr(k, n) with n ≤ 4 for equivariant K-theory puzzles, whose values are Laurent polynomials in t', () => {
+    const { checked, fails } = sweep(parseClaim(shipped('equivariant-k-structure-constants-associative')), { n: 4 });
+    const binomial = (n: number, k: number): number => (k === 0 || k === n ? 1 : binomial(n - 1, k - 1) + binomial(n - 1, k));
+    let quadruples = 0;
+    for (let n = 1; n <= 4; n++) for (let k = 0; k <= n; k++) quadruples += binomial(n, k) ** 4;
+    expect(checked).toBe(quadruples);
+    expect(fails).toEqual([]);
+  });
+
   it('a deliberately wrong formula (λ and σ exchanged on the right) yields its smallest counterexample, confirmed by naive counts', () => {
     const claim = shipped('cohomology-structure-constants-associative');
     const right = claim.compare.formula!.right;

@@ -31,7 +31,6 @@ describe('loadClaim', () => {
     'unknown-key.json': { code: 'invalid_claim', path: '(top level)', message: /received 'extra'/ },
     'unknown-theory.json': { code: 'invalid_claim', path: 'theory', message: /'cohomology' \| 'equivariant' \| 'k-theory' \| 'dual-k-theory'.*received "quantum"/ },
     'bad-custom-piece-set.json': { code: 'invalid_claim', path: 'theory.pieces[0].edges.falling', message: /^Falling edge label: expected string, received nothing/ },
-    'formula-over-quotients.json': { code: 'invalid_claim', path: 'theory', message: /^Formula sides: expected integer or polynomial values, received quotients/ },
     'bad-weight-formula.json': { code: 'invalid_claim', path: 'theory.pieces[2].weight.formula', message: /^Weight formula: expected '\)', received the end/ },
     'bad-step-type.json': { code: 'invalid_claim', path: 'transform[0].type', message: /'rotate' \| 'mirror'.*received "spin"/ },
     'rotate-not-multiple.json': { code: 'invalid_claim', path: 'transform[0].degrees', message: /multiple of 60.*received 45/ },
