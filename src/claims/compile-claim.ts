@@ -67,7 +67,7 @@ export function compileClaim(claim: Claim, file?: string, rangeOverride?: Readon
   const variables = claim.family.variables.map((v, i) => {
     const max = rangeOverride?.[v.name] ?? v.max;
     if (claim.family.variables.findIndex((w) => w.name === v.name) !== i) fail({ what: 'Variable name', expected: 'distinct names', received: `'${v.name}' twice` }, `family.variables[${i}].name`);
-    if (v.min > max) fail({ what: 'Variable range', expected: 'min ≤ max', received: `${v.name} from ${v.min} to ${max}` }, `family.variables[${i}]`, rangeOverride?.[v.name] !== undefined ? 'the --max bound is below the declared minimum' : undefined);
+    if (v.min > max) fail({ what: 'Variable range', expected: 'min ≤ max', received: `${v.name} from ${v.min} to ${max}` }, `family.variables[${i}]`, rangeOverride?.[v.name] !== undefined ? 'the raised upper bound (max) is below the declared minimum' : undefined);
     return { name: v.name, min: v.min, max };
   });
   if (rangeOverride) {

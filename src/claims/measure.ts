@@ -234,7 +234,7 @@ export class Meter {
       const map = this.completions(m.type, lengths, sides, () => ({ semiring }), (v) => v, true);
       return [...map].map(([k, v]): [string, Value] => [k, { kind: 'int', v: v as SafeInt }]);
     }
-    if (m.type === 'statistic') throw new Error('side-5 values of a statistic are not needed');
+    if (m.type === 'statistic') throw new CodedError('internal_error', { what: 'Side-5 values', expected: 'a value or puzzle-count measure', received: 'a statistic' });
     if (this.fraction) return [...this.fractions(lengths, sides, true)].map(([k, v]): [string, Value] => [k, { kind: 'frac', v: v as Fraction, letter: this.letter }]);
     return [...this.polynomials(lengths, sides, true)].map(([k, v]): [string, Value] => [k, { kind: 'poly', v: v as Polynomial }]);
   }

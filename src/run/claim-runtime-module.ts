@@ -1,5 +1,6 @@
 import type { ClaimPlan, EvaluateOptions, Evaluator } from '../claims/claim-api.js';
 import type { ClaimProgram } from '../claims/compile-claim-program.js';
+import { CodedError } from '../errors/index.js';
 
 /** A claim ready to sweep: its plan (classes, index ↔ instance) and an evaluator with its caches. */
 export interface ClaimRuntime {
@@ -30,6 +31,6 @@ export interface SweepClaim {
 /** Imports a runtime module by URL and checks it has the expected export. */
 export async function importClaimRuntime(url: string): Promise<ClaimRuntimeModule> {
   const mod = (await import(url)) as Partial<ClaimRuntimeModule>;
-  if (typeof mod.createClaimRuntime !== 'function') throw new Error(`runtime module ${url} lacks createClaimRuntime`);
+  if (typeof mod.createClaimRuntime !== 'function') throw new CodedError('internal_error', { what: 'Runtime module', expected: 'an export createClaimRuntime', received: `none in ${url}` });
   return mod as ClaimRuntimeModule;
 }

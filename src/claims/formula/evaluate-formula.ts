@@ -1,4 +1,5 @@
 import { addFraction, addInt, addPoly, constantPoly, fractionOf, isZeroInt, mulFraction, mulInt, mulPoly, toBigInt, type Fraction, type Polynomial, type SafeInt, type StripLetter } from '../../engine/index.js';
+import { CodedError } from '../../errors/index.js';
 import type { Value } from '../measure.js';
 import { nextString } from '../multiset-rank.js';
 import type { CompiledBinder, CompiledTerm } from './compile-formula.js';
@@ -18,7 +19,7 @@ const isZero = (x: Exact) => (x.kind === 'int' ? isZeroInt(x.v) : x.kind === 'po
 
 function exact(v: Value): Exact {
   if (v.kind === 'int' || v.kind === 'poly' || v.kind === 'frac') return v;
-  throw new Error(`formula values are exact integers, polynomials or quotients, received a ${v.kind} value`);
+  throw new CodedError('internal_error', { what: 'Formula value', expected: 'an exact integer, polynomial or quotient', received: `a ${v.kind} value` });
 }
 
 // Quotients (Laurent values of equivariant K-theory, rational functions) absorb integers and polynomials.

@@ -90,3 +90,11 @@ describe('the error catalogue', () => {
     expect(wrapped.message).toBe('Internal error: expected none, received boom');
   });
 });
+
+describe('README, "Exit codes"', () => {
+  it('lists every code with the exit status of its kind', async () => {
+    const { readFileSync } = await import('node:fs');
+    const readme = readFileSync('README.md', 'utf8');
+    for (const [code, spec] of Object.entries(ERROR_CATALOGUE)) expect(readme, code).toContain(`| \`${code}\` | ${EXIT_STATUS[spec.kind]} | ${spec.means} |`);
+  });
+});
