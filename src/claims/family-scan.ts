@@ -40,9 +40,17 @@ interface Cell {
   readonly partnerBase: number;
   readonly partnerCoef: Float64Array;
   readonly entries: number;
+  /** Sums over the last group's sides, per content of that group (`innerSums`). */
+  readonly inner: Map<number, InnerSums>;
 }
 
-const NOT_TABULATED: Cell = { ok: false, left: new Float64Array(0), leftStride: new Float64Array(6), right: new Float64Array(0), rightStride: new Float64Array(6), rankMap: [], inClass: false, partnerBase: 0, partnerCoef: new Float64Array(6), entries: 0 };
+interface InnerSums {
+  readonly own: Float64Array;
+  readonly at: Float64Array;
+  readonly partner: Float64Array;
+}
+
+const NOT_TABULATED: Cell = { ok: false, left: new Float64Array(0), leftStride: new Float64Array(6), right: new Float64Array(0), rightStride: new Float64Array(6), rankMap: [], inClass: false, partnerBase: 0, partnerCoef: new Float64Array(6), entries: 0, inner: new Map() };
 
 // Table entries kept per worker (8 bytes each): the 6×6 parallelogram family needs 0.85 M per theory.
 const CACHE_ENTRIES = 6_000_000;
@@ -154,6 +162,52 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     let baseOwn = 0;
     let baseAt = 0;
     let basePartner = 0;
+    const none: Float64Array<ArrayBufferLike> = new Float64Array(0);
+    let sums: InnerSums = { own: none, at: none, partner: none };
+    let ownSum = none;
+    let atSum = none;
+    let partnerSum = none;
+    let left = none;
+    let right = none;
+    let inClass = false;
+    // Per cell, for every position r inside the last group's content: that group's sides' terms of the
+    // three sums (b's table index, T(b)'s table index, T(b)'s class index), so a position costs three reads.
+    const innerSums = (cell: Cell, c: number): InnerSums => {
+      const cached = cell.inner.get(c);
+      if (cached) return cached;
+      const size = L.single ? L.size : L.strings[c]! ** L.sides.length;
+      const own = new Float64Array(size);
+      const at = new Float64Array(size);
+      const partner = new Float64Array(size);
+      const d = new Int32Array(6);
+      const n = L.strings[c]!;
+      for (let r = 0; r < size; r++) {
+        if (L.single) d[L.sides[0]!] = r;
+        else {
+          let x = r;
+          for (let k = L.sides.length - 1; k >= 0; k--) {
+            const y = x % n;
+            d[L.sides[k]!] = y;
+            x = (x - y) / n;
+          }
+        }
+        let o = 0;
+        let a = 0;
+        let p = 0;
+        for (const k of innerK) o += cell.leftStride[k]! * d[k]!;
+        for (const j of innerJ) {
+          const t = cell.rankMap[j]![d[from[j]!]!]!;
+          a += cell.rightStride[j]! * t;
+          p += cell.partnerCoef[j]! * t;
+        }
+        own[r] = o;
+        at[r] = a;
+        partner[r] = p;
+      }
+      const sumsOf = { own, at, partner };
+      cell.inner.set(c, sumsOf);
+      return sumsOf;
+    };
     for (let i = Number(start), e = Number(end); i < e; i++) {
       // Unrank i: mixed radix over groups (least significant last), then ranks within the group's content.
       let r = i % L.size;
@@ -188,16 +242,9 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
         }
       }
       let c = 0;
-      if (L.single) digit[L.sides[0]!] = r;
-      else {
+      if (!L.single) {
         while (r >= L.offsets[c + 1]!) c++;
         r -= L.offsets[c]!;
-        const n = L.strings[c]!;
-        for (let k = L.sides.length - 1; k >= 0; k--) {
-          const y = r % n;
-          digit[L.sides[k]!] = y;
-          r = (r - y) / n;
-        }
       }
       contents[last] = c;
       const key = outerKey * L.strings.length + c;
@@ -220,17 +267,20 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
           baseAt += cell.rightStride[j]! * t;
           basePartner += cell.partnerCoef[j]! * t;
         }
+        sums = innerSums(cell, c);
+        ownSum = sums.own;
+        atSum = sums.at;
+        partnerSum = sums.partner;
+        left = cell.left;
+        right = cell.right;
+        inClass = cell.inClass;
         stale = false;
       }
-      let at = baseAt;
-      let partner = basePartner;
-      for (const j of innerJ) {
-        const t = cell.rankMap[j]![digit[from[j]!]!]!;
-        at += cell.rightStride[j]! * t;
-        partner += cell.partnerCoef[j]! * t;
-      }
+      // r: the position inside the last group's content, whose sides' terms were summed once per cell
+      const at = baseAt + atSum[r]!;
+      const partner = basePartner + partnerSum[r]!;
       let pairable = false;
-      if (involutive && cell.inClass) {
+      if (involutive && inClass) {
         if (partner < i) {
           tally.checked++;
           tally.paired++;
@@ -238,26 +288,23 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
         }
         pairable = partner > i;
       }
-      let own = baseOwn;
-      for (const k of innerK) own += cell.leftStride[k]! * digit[k]!;
-      const left = cell.left[own]!;
-      if (nonzeroOnly && left === 0 && !pairable) {
+      const l = left[baseOwn + ownSum[r]!]!;
+      if (nonzeroOnly && l === 0 && !pairable) {
         tally.checked++;
         tally.skippedZero++;
         continue;
       }
-      const right = cell.right[at]!;
-      if (left !== right) {
+      if (l !== right[at]) {
         // A failure (or a zero beside a nonzero partner): the per-instance path builds and confirms its rows.
         fallback(BigInt(i));
         continue;
       }
       const both = pairable ? 2 : 1;
       tally.checked++;
-      if (nonzeroOnly && left === 0) tally.skippedZero += both;
+      if (nonzeroOnly && l === 0) tally.skippedZero += both;
       else {
         tally.holds += both;
-        if (left === 0) tally.vacuous += both;
+        if (l === 0) tally.vacuous += both;
         else tally.nonzero += both;
       }
     }
@@ -393,13 +440,13 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       // T(b) lies in this class: its values are a cell of the same left tables.
       const other = leftOf(target.contents);
       if (!other) return undefined;
-      return { ok: true, left: own.values, leftStride, right: other.values, rightStride: other.stride, rankMap: target.rankMap, inClass: true, partnerBase, partnerCoef, entries: 0 };
+      return { ok: true, left: own.values, leftStride, right: other.values, rightStride: other.stride, rankMap: target.rankMap, inClass: true, partnerBase, partnerCoef, entries: 0, inner: new Map() };
     }
     // Another theory or outside the class: a table of the images themselves, read by b's own digits (no pairing then).
     const right = countFamily(makeRegion(lengths), images, program.right, { semiring }).numbers;
     if (!right) return undefined;
     const identity = images.map((list) => Int32Array.from(list, (_, d) => d));
-    return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length };
+    return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length, inner: new Map() };
   }
 
   // The class cell T(b) falls in, with each side's source digit → rank there; undefined if T(b) is not in the class.
