@@ -22,6 +22,7 @@ import type { SweepSummary } from './run/sweep-summary.js';
 import { regionOfSides } from './claims/count-region.js';
 
 export { CodedError, JSON_FORMAT_VERSION, partitionOfString, partitionText, parsePartition, stringOfPartition };
+export { ERROR_CATALOGUE, errorJson, exitCodeFor, formatError, type ErrorCode, type ErrorParams, type ErrorParts } from './errors/index.js';
 export type { Claim, Grassmannian, PieceSet, Puzzle, SweepSummary, ValueForm };
 export type { CountJson, JsonInteger, PartitionsJson, ProductJson, TableJson, TermJson, ValueJson } from './products/json-types.js';
 
@@ -83,7 +84,7 @@ export function* enumeratePuzzles(options: { readonly theory: TheoryInput; reado
   yield* enumerateEngine(regionOfSides(sides), sides, theoryOf(options.theory));
 }
 
-/** Reads and validates a claim file; throws an `CodedError` with the JSON path of the first mistake. */
+/** Reads and validates a claim file; throws a `CodedError` with the JSON path of the first mistake. */
 export function loadClaim(file: string): Claim {
   return loadClaimFile(file);
 }

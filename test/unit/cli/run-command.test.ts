@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { runCommand } from '../../../src/cli/run-command.js';
+import { flagOfField, runCommand } from '../../../src/cli/run-command.js';
 import { CodedError } from '../../../src/errors/index.js';
 
 function capture() {
@@ -57,5 +57,14 @@ describe('runCommand (the CLI edge)', () => {
     vi.restoreAllMocks();
     expect(exit).toBe(3);
     expect(err.join('')).toContain('[internal_error]');
+  });
+
+  it('maps the fields the layers below report to the flags typed, keeping a side index', () => {
+    expect(flagOfField('sides[4]')).toBe('--sides[4]');
+    expect(flagOfField('sides')).toBe('--sides');
+    expect(flagOfField('theory')).toBe('--theory');
+    expect(flagOfField('statistic')).toBe('--statistic');
+    expect(flagOfField('family.sides[0]')).toBeUndefined();
+    expect(flagOfField(undefined)).toBeUndefined();
   });
 });
