@@ -130,7 +130,7 @@ export function genericCountFixed<T>(
     else b = genericStep(plan, label, --hi, semiring, weights, b, true);
     // The estimate walks every value, so it is taken every fourth step.
     if (hooks.checkMemory && (lo + plan.stepCount - hi) % 4 === 0) hooks.checkMemory(estimateBytes(semiring, f) + estimateBytes(semiring, b), lo + plan.stepCount - hi);
-    hooks.onProgress?.({ done: lo + plan.stepCount - hi, total: plan.stepCount, profiles: f.size + b.size });
+    hooks.onProgress?.({ done: lo + plan.stepCount - hi, total: plan.stepCount, profiles: f.size + b.size, fromTop: f.size, fromBottom: b.size });
     if (f.size === 0 || b.size === 0) return semiring.zero;
   }
   let total = semiring.zero;

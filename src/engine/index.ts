@@ -21,3 +21,4 @@ export * from './puzzle-enumeration.js';
 export * from './completion.js';
 export * from './semirings/tuple-semiring.js';
 export * from './family-count.js';
+export * from './default-strategy.js';

@@ -200,7 +200,14 @@ export function meetTables(f: ProfileTable, b: ProfileTable, lanes: Lanes): numb
 export type SweepStrategy = 'forward' | 'backward' | 'meet';
 
 /** Progress of a long count: steps taken out of all steps, and the live profiles now held. */
-export type ProgressCallback = (progress: { readonly done: number; readonly total: number; readonly profiles: number }) => void;
+export type ProgressCallback = (progress: {
+  readonly done: number;
+  readonly total: number;
+  readonly profiles: number;
+  /** Of a fixed side 5's count: the live profiles swept down from the top, and up from side 5 (the one that changed was just extended). */
+  readonly fromTop?: number;
+  readonly fromBottom?: number;
+}) => void;
 
 /** Hooks a sweep calls between steps: progress, and a check of the memory the tables hold. */
 export interface SweepHooks {
@@ -235,7 +242,7 @@ export function countFixed(plan: KernelPlan, label: Int32Array, initial: number,
       [b, bNext] = [bNext, b];
     }
     hooks.checkMemory?.(f.bytes + fNext.bytes + b.bytes + bNext.bytes, lo + total - hi);
-    hooks.onProgress?.({ done: lo + total - hi, total, profiles: f.count + b.count });
+    hooks.onProgress?.({ done: lo + total - hi, total, profiles: f.count + b.count, fromTop: f.count, fromBottom: b.count });
     if (f.count === 0 || b.count === 0) return new Array<number>(L).fill(0);
   }
   return meetTables(f, b, lanes);

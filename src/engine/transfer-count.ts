@@ -1,6 +1,6 @@
 import { checkBoundary, reverseString, type Boundary } from './boundary.js';
 import { genericWeights, numericLanes } from './count-kernel.js';
-
+import { defaultStrategy } from './default-strategy.js';
 import { BYTES_PER_PROFILE, BYTES_PER_TERM, genericCountFixed, genericSweepOpen } from './generic-sweep.js';
 import { fillingCountSemiring } from './semirings/integer-semiring.js';
 import { kernelPlan, stepLabels, type KernelPlan } from './kernel-plan.js';
@@ -21,9 +21,10 @@ export interface CountOptions<T> {
   /** Defaults to the weights the piece set declares. */
   readonly weigher?: Weigher<T>;
   /**
-   * How a fixed side 5 is used: `meet` (default) sweeps down from the top and up from side 5, always
-   * extending the smaller frontier, so no state that cannot reach side 5 is carried far; `forward`
-   * is the plain top-down sweep; `backward` the bottom-up one.
+   * How a fixed side 5 is used: `meet` sweeps down from the top and up from side 5, always extending
+   * the smaller frontier, so no state that cannot reach side 5 is carried far; `forward` is the plain
+   * top-down sweep; `backward` the bottom-up one. Default: per theory, the one measured to do least
+   * (`defaultStrategy`: `meet`, `backward` for ssm-nonequivariant).
    */
   readonly strategy?: SweepStrategy;
   /** Called after every step with the steps done and the live profiles (no I/O in the engine). */
@@ -119,7 +120,7 @@ export function memoryLimitError(bytes: number, limit: number, step: number, tot
 function countOne<T>(region: Region, boundary: Boundary, pieces: PieceSet, options: CountOptions<T>): T {
   const plan = kernelPlan(region, pieces);
   const { semiring } = options;
-  const strategy = options.strategy ?? 'meet';
+  const strategy = options.strategy ?? defaultStrategy(pieces);
   if (!plan.fits) {
     const final = sweep(compilePlan(region, boundary, pieces), options);
     const want = [...reverseString(boundary[4]!)].map((c) => String.fromCharCode(pieces.labels.indexOf(c))).join('');
@@ -221,7 +222,7 @@ export function countBoundaryValues(region: Region, sides: readonly string[], pi
     if (lanes) {
       const { label, initial, target } = stepLabels(plan, boundary);
       try {
-        const values = countFixed(plan, label, initial, target, lanes, first.strategy ?? 'meet', sweepHooks(first));
+        const values = countFixed(plan, label, initial, target, lanes, first.strategy ?? defaultStrategy(pieces), sweepHooks(first));
         integer.forEach((k, l) => (out[k] = values[l]));
         generic = generic.filter((k) => !integer.includes(k));
       } catch (e) {

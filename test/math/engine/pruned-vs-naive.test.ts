@@ -46,7 +46,7 @@ function evaluateModular(terms: readonly { coefficient: bigint; exponents: reado
 // labeling of every region with N ≤ 4, in every semiring the engine offers [common practice, no
 // source: two algorithms for one finite sum].
 describe('every sweep strategy = naive backtracking on every boundary with N ≤ 4', () => {
-  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'])('%s', (theory) => {
+  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'])('%s', (theory) => {
     const pieces = theoryPieceSet(theory);
     const naivePieces = pieces.pieces.map((p) => ({ orientation: p.orientation, labels: [...p.labels] as [string, string, string], weight: p.weight }));
     const modular = modularSemiring(7);

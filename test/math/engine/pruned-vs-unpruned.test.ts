@@ -22,12 +22,12 @@ function generator(seed: number): () => number {
   };
 }
 
-// Property: pruning never changes a value. The pruned sweeps (backward, meet in the middle) equal the
-// plain forward sweep on random 0/1 boundaries of every region with N ≤ 5, weighted towards boundaries
+// Property: pruning never changes a value. The pruned sweeps (backward, meet in the middle, and the
+// per-theory default, defaultStrategy) equal the plain forward sweep on random 0/1 boundaries of every region with N ≤ 5, weighted towards boundaries
 // whose sides have equal numbers of 1s (the ones with puzzles) [definition: the three sweeps sum the
 // same paths of one transfer matrix].
 describe('pruned = unpruned on boundaries with N ≤ 5', () => {
-  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory'])('%s', (theory) => {
+  it.each(['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'])('%s', (theory) => {
     const pieces = theoryPieceSet(theory);
     const random = generator(20261202);
     const modular = modularSemiring(3);
@@ -41,8 +41,8 @@ describe('pruned = unpruned on boundaries with N ≤ 5', () => {
         const p = countBoundary(region, sides, pieces, { semiring: ring, strategy: 'forward' });
         const m = countBoundary(region, sides, pieces, { semiring: modular, strategy: 'forward' });
         if (f !== 0) nonzero++;
-        for (const strategy of ['backward', 'meet'] as const) {
-          const at = `${lengths} ${sides} ${strategy}`;
+        for (const strategy of ['backward', 'meet', undefined] as const) {
+          const at = `${lengths} ${sides} ${strategy ?? 'default'}`;
           expect(countBoundary(region, sides, pieces, { semiring: fillingCountSemiring, strategy }), at).toBe(f);
           expect(polyEquals(countBoundary(region, sides, pieces, { semiring: ring, strategy }), p), at).toBe(true);
           expect(countBoundary(region, sides, pieces, { semiring: modular, strategy }), at).toEqual(m);
