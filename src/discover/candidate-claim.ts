@@ -1,4 +1,5 @@
 import type { ClaimInput } from '../claims/index.js';
+import { valueRing } from '../engine/index.js';
 import type { Candidate } from './candidate-space.js';
 import type { DiscoverInput } from './discover-input.js';
 import type { PermutationRule } from './infer-substitution.js';
@@ -12,7 +13,7 @@ export function candidateId(c: Candidate, input: DiscoverInput): string {
 
 /** The candidate as a complete claim, exactly as discover tests it (and stores it). */
 export function candidateClaim(c: Candidate, input: DiscoverInput): ClaimInput {
-  const statement = `Candidate from discover: ${c.description} keeps the ${c.left.name} value${c.left === c.right ? '' : ` (the right side measured in ${c.right.name})`}${c.polynomial ? ', up to a permutation of y_1..y_N' : ''}.`;
+  const statement = `Candidate from discover: ${c.description} keeps the ${c.left.name} value${c.left === c.right ? '' : ` (the right side measured in ${c.right.name})`}${c.polynomial ? `, up to a permutation of ${valueRing(c.left.pieces).letter}_1..${valueRing(c.left.pieces).letter}_N` : ''}.`;
   return {
     id: candidateId(c, input),
     statement,

@@ -1,9 +1,8 @@
 import { applySideMap } from '../claims/boundary-transform.js';
-import { findPermutations, isZeroValue, relationHolds } from '../claims/compare-values.js';
+import { equalValues, findFractionPermutations, findPermutations, isZeroValue, relationHolds } from '../claims/compare-values.js';
 import type { ClaimPlanExt } from '../claims/plan-claim.js';
 import type { Instance, SizeClass } from '../claims/index.js';
-import type { Value } from '../claims/measure.js';
-import { polyEquals, substitutePoly } from '../engine/index.js';
+import { substituteValue, type Value } from '../claims/measure.js';
 import type { Candidate } from './candidate-space.js';
 import type { ValueTable } from './value-table.js';
 
@@ -73,12 +72,19 @@ export function compareOne(
   }
   const right = table.value(c.right.name, t.lengths, t.sides);
   const nonzero = !isZeroValue(left) || !isZeroValue(right);
-  if (!(c.polynomial && left.kind === 'poly' && right.kind === 'poly')) return { holds: relationHolds({ type: 'equal' }, left, right), nonzero, left, right, t, common };
+  // Polynomials and quotients (Laurent values of equivariant K-theory) alike: σ renames y_m or t_m.
+  const bothPoly = left.kind === 'poly' && right.kind === 'poly';
+  if (!(c.polynomial && (bothPoly || (left.kind === 'frac' && right.kind === 'frac')))) return { holds: relationHolds({ type: 'equal' }, left, right), nonzero, left, right, t, common };
   const m = Math.max(sizeOf(lengths), sizeOf(t.lengths));
   // Narrow the class's common permutations first; search the whole space only when none is left.
-  const narrowed = common ? [...common].filter(([, p]) => p.length === m && polyEquals(left.v, substitutePoly(right.v, (k) => (k < m ? p[k]! - 1 : k)))) : [];
+  const narrowed = common ? [...common].filter(([, p]) => p.length === m && equalValues(left, substituteValue(right, p))) : [];
   if (narrowed.length > 0) return { holds: true, nonzero, left, right, t, common: new Map(narrowed) };
-  const found = findPermutations(permutations, m, left.v, right.v).found;
+  const found =
+    left.kind === 'poly' && right.kind === 'poly'
+      ? findPermutations(permutations, m, left.v, right.v).found
+      : left.kind === 'frac' && right.kind === 'frac'
+        ? findFractionPermutations(permutations, m, left.v, right.v).found
+        : [];
   return { holds: found.length > 0, nonzero, left, right, t, common: common === undefined ? new Map(found.map((p) => [p.join(','), p])) : new Map() };
 }
 

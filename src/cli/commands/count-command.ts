@@ -20,7 +20,10 @@ async function countByLocalization(theory: LocalizationTheory, args: CountArgs):
   if (!triangle || triangle.strings.length !== 3 || args.sides !== undefined || args.completed || args.statistic !== undefined) {
     throw new CodedError('invalid_argument', { what: `--theory ${theory}`, expected: 'a structure constant --triangle λ,μ,ν (or --partitions)', received: 'another boundary or option' }, {
       path: '--theory',
-      hint: 'no puzzle rule for this theory agrees with localization yet, so only triangles are computed, by localization (README, "Theories")',
+      hint:
+        theory === 'equivariant-k-theory'
+          ? 'no built-in puzzle rule, so only triangles are computed, by localization; other regions: --theory conjectures/pieces/equivariant-k-theory-rhombi.json (verified to n = 6; README, "Theories")'
+          : 'no puzzle rule for this theory agrees with localization yet, so only triangles are computed, by localization (README, "Theories")',
     });
   }
   const [lambda, mu, nu] = triangle.strings as [string, string, string];
