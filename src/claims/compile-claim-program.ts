@@ -1,3 +1,4 @@
+import { formulaUses, type Piece } from '../engine/index.js';
 import { claimSchema, type Claim } from './claim-schema.js';
 import { claimZodError } from './claim-zod-error.js';
 import { parseMarked } from './zod-issue.js';
@@ -54,7 +55,9 @@ function programOf(claim: Claim, source: unknown, file: string | undefined, max:
   const compiled = compileClaim(claim, file, max && Object.keys(max).length ? max : undefined);
   const relation = relationDef(claim.compare.relation);
   const sideMap = transformSideMap(claim.transform);
-  const names = [...new Set([compiled.left, compiled.right].flatMap((p) => p.pieces.flatMap((q) => (q.weight.type === 'variable' ? [q.weight.name] : []))))].sort();
+  // Named variables and the parameters of weight formulas (`h` in 1/(1 + h*(y_j − y_i))) alike.
+  const named = (w: Piece['weight']): string[] => (w.type === 'variable' ? [w.name] : w.type === 'formula' ? [...formulaUses(w.formula).parameters] : []);
+  const names = [...new Set([compiled.left, compiled.right].flatMap((p) => p.pieces.flatMap((q) => named(q.weight))))].sort();
   const program: ClaimProgram = {
     ...compiled,
     source,

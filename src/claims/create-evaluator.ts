@@ -167,7 +167,8 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     if (searchSpace && values.left.kind === 'poly' && values.compared.kind === 'poly') return permutationResult(findPermutations(searchSpace, m, values.left.v, values.compared.v));
     if (searchSpace && values.left.kind === 'frac' && values.compared.kind === 'frac') return permutationResult(findFractionPermutations(searchSpace, m, values.left.v, values.compared.v));
     let holds = program.relation.holds(values.left, values.compared);
-    let errorBound = mode === 'modular' ? errorBoundOf(values.left, values.compared) : 0;
+    // Unequal residues prove unequal values (all denominators were invertible at the point): only a "holds" has a bound.
+    let errorBound = mode === 'modular' && holds ? errorBoundOf(values.left, values.compared) : 0;
     if (holds && mode === 'modular' && errorBound > MAX_MODULAR_ERROR) {
       // The modular test would say too little here: decide exactly instead.
       mode = 'exact';

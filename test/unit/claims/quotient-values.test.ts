@@ -99,3 +99,22 @@ describe('claims over rational-function values', () => {
     for (const x of modular) if (x.status === 'holds') expect(x.method).toBe('exact');
   });
 });
+
+describe('named parameters of weight formulas in quotient values', () => {
+  it('keep their names in exact values (h in −1/(1 + h(y_j − y_i)), quotient demo set)', () => {
+    const pieces = JSON.parse(readFileSync(new URL('../../../conjectures/pieces/quotient-weights-demo.json', import.meta.url), 'utf8')) as object;
+    const claim = parseClaim({
+      id: 'named-parameter',
+      statement: 's',
+      theory: pieces,
+      family: { sides: ['n', 0, 'n', 0, 'n', 0], variables: [{ name: 'n', min: 2, max: 2 }] },
+      transform: [{ type: 'rotate', degrees: 120 }],
+      compare: { measure: { type: 'value' }, relation: { type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 1, to: 'n' }] } },
+    });
+    expect(compileClaimProgram(claim).names).toEqual(['h']);
+    const bad = sweep(claim, true).find((r) => r.status === 'fails')!;
+    expect(bad.left.text).toMatch(/\bh\b/);
+    expect(bad.left.text).not.toMatch(/v\d/);
+    expect((bad.left.json as { variables: string[] }).variables).toEqual(['y1', 'y2', 'h']);
+  });
+});
