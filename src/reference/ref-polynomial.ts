@@ -137,6 +137,8 @@ export class RefPolynomial {
     if (divisor.isZero()) {
       throw new CodedError('inexact_division', { what: 'Polynomial divisor', expected: 'a nonzero polynomial', received: '0' });
     }
+    const unit = unitLinearVariable(divisor);
+    if (unit !== undefined) return this.divUnitLinear(divisor, unit);
     // Lex order is a monomial order, so if d | r then LT(d) | LT(r); peeling leading terms must end at 0.
     const lead = divisor.leadingTerm();
     const rest = [...divisor.terms.values()].filter((t) => t !== lead);
@@ -163,6 +165,50 @@ export class RefPolynomial {
         const c = (remainder.get(key)?.coeff ?? 0n) - qc * t.coeff;
         if (c === 0n) remainder.delete(key);
         else remainder.set(key, { exps: pe, coeff: c });
+      }
+    }
+    return new RefPolynomial(quotient);
+  }
+
+  // Synthetic division by ±y_v + r (r free of y_v): with this = Σ P_k y_v^k, the quotient's coefficients
+  // satisfy ±Q_{k−1} = P_k − r·Q_k from the top down, and r·Q_0 = P_0 checks exactness. Linear in the
+  // size, where peeling leading terms rescans the remainder for every quotient term.
+  private divUnitLinear(divisor: RefPolynomial, v: number): RefPolynomial {
+    let sign = 1n;
+    const rest = new Map<string, Monomial>();
+    for (const [k, t] of divisor.terms) {
+      if ((t.exps[v] ?? 0) === 1) sign = t.coeff;
+      else rest.set(k, t);
+    }
+    const r = new RefPolynomial(rest);
+    const slices = new Map<number, Map<string, Monomial>>();
+    let top = 0;
+    for (const t of this.terms.values()) {
+      const e = t.exps[v] ?? 0;
+      const exps = trim(t.exps.map((x, i) => (i === v ? 0 : x)));
+      let slice = slices.get(e);
+      if (!slice) slices.set(e, (slice = new Map()));
+      slice.set(keyOf(exps), { exps, coeff: t.coeff });
+      top = Math.max(top, e);
+    }
+    const quotient = new Map<string, Monomial>();
+    let q = RefPolynomial.zero();
+    for (let k = top; k >= 0; k--) {
+      const p = new RefPolynomial(slices.get(k) ?? new Map());
+      const next = p.sub(r.mul(q));
+      if (k === 0) {
+        if (!next.isZero()) {
+          throw new ReferenceComputationError('inexact_division', 'Polynomial division: expected a divisor of the dividend, received a nonzero remainder');
+        }
+        break;
+      }
+      q = next.scale(sign); // sign is ±1, its own inverse
+      for (const t of q.terms.values()) {
+        const exps = [...t.exps];
+        while (exps.length <= v) exps.push(0);
+        exps[v] = k - 1;
+        const tr = trim(exps);
+        quotient.set(keyOf(tr), { exps: tr, coeff: t.coeff });
       }
     }
     return new RefPolynomial(quotient);
@@ -246,6 +292,18 @@ export class RefPolynomial {
       .map((t) => `${t.coefficient}` + t.exponents.map((e, i) => (e === 0 ? '' : `*y${i + 1}^${e}`)).join(''))
       .join(' + ');
   }
+}
+
+/** A variable v in which the divisor is ±y_v plus terms free of y_v, if any (for synthetic division). */
+function unitLinearVariable(divisor: RefPolynomial): number | undefined {
+  const terms = divisor.rawTerms();
+  for (const t of terms) {
+    if (t.coeff !== 1n && t.coeff !== -1n) continue;
+    const v = t.exps.findIndex((e) => e > 0);
+    if (v < 0 || t.exps[v] !== 1 || t.exps.some((e, i) => i !== v && e > 0)) continue;
+    if (terms.every((u) => u === t || (u.exps[v] ?? 0) === 0)) return v;
+  }
+  return undefined;
 }
 
 function leadingOf(terms: Iterable<Monomial>): Monomial {

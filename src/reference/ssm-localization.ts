@@ -34,6 +34,11 @@ export function normalProduct(w: string): RefPolynomial {
   return productOverInversions(w, ONE, root, (a, b) => a.mul(b));
 }
 
+/** The normal weights y_j − y_i (i < j, w_i = 1, w_j = 0) one by one. */
+function normalRoots(w: string): RefPolynomial[] {
+  return productOverInversions<RefPolynomial[]>(w, [], (i, j) => [root(i, j)], (a, b) => [...a, ...b]);
+}
+
 /** Π_{key} (1 + y_j − y_i)^e as a polynomial. */
 export function factorProduct(factors: ReadonlyMap<ChernFactorKey, number>): RefPolynomial {
   let acc = ONE;
@@ -109,7 +114,9 @@ export function schwartzMacPhersonTable(kind: SchwartzMacPherson, k: number, n: 
           if (nw !== undefined) rem = rem.sub(c.mul(RefFraction.fromPolynomial(nw)));
         }
         if (rem.isZero()) continue;
-        found.push([w, rem.divPolynomial(normalProduct(w)).divFactors(cellFactors(w)).reduced()]);
+        // One normal root at a time: division by a linear form is synthetic, by their product it is not.
+        for (const r of normalRoots(w)) rem = rem.divPolynomial(r);
+        found.push([w, rem.divFactors(cellFactors(w)).reduced()]);
       }
       for (const [nu, c] of found) {
         table.set(`${lam},${mu},${nu}`, c);
