@@ -198,7 +198,7 @@ export class RefPolynomial {
       const next = p.sub(r.mul(q));
       if (k === 0) {
         if (!next.isZero()) {
-          throw new ReferenceComputationError('inexact_division', 'Polynomial division: expected a divisor of the dividend, received a nonzero remainder');
+          throw new CodedError('inexact_division', { what: 'Polynomial division', expected: 'a divisor of the dividend', received: 'a nonzero remainder' });
         }
         break;
       }

@@ -29,6 +29,17 @@ describe('RefPolynomial', () => {
     expect(c(12).divExact(c(-4)).equals(c(-3))).toBe(true);
   });
 
+  it('divides by linear forms with a unit variable (synthetic division) as multiplication undoes (common practice)', () => {
+    const f = c(1).add(y(2)).sub(y(0)); // 1 + y3 − y1
+    const g = y(1).mul(y(1)).add(c(5).mul(y(0)).mul(y(2))).sub(c(7)); // y2² + 5 y1 y3 − 7
+    const h = c(2).mul(y(0)).sub(y(1)).add(c(3)); // 2y1 − y2 + 3: unit only in y2
+    const p = f.mul(f).mul(f).mul(g).mul(h);
+    expect(p.divExact(f).divExact(f).equals(f.mul(g).mul(h))).toBe(true);
+    expect(p.divExact(h).equals(f.mul(f).mul(f).mul(g))).toBe(true);
+    expect(() => g.divExact(f)).toThrowError(/expected a divisor/);
+    expect(() => f.mul(g).add(c(1)).divExact(h)).toThrowError(/expected a divisor/);
+  });
+
   it('throws a coded error on an inexact division (y1 is not divisible by y2; 3 is not divisible by 2)', () => {
     expect(() => y(0).divExact(y(1))).toThrowError(/Polynomial division: expected a divisor/);
     expect(() => c(3).divExact(c(2))).toThrowError(/expected a divisor/);
