@@ -11,6 +11,7 @@ export * from './semirings/polynomial.js';
 export * from './semirings/polynomial-semiring.js';
 export * from './semirings/modular-semiring.js';
 export * from './semirings/fraction-semiring.js';
+export * from './semirings/point-semiring.js';
 export * from './weight-formula.js';
 export * from './laurent-degree.js';
 export * from './value-ring.js';

@@ -1,8 +1,9 @@
 
 import { buildPieceSet, type PieceSet, type PieceSpec } from './piece-set.js';
 import { CodedError } from '../errors/index.js';
+import { ssmCrossingPieces } from './ssm-pieces.js';
 
-export const BUILTIN_THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant'] as const;
+export const BUILTIN_THEORIES = ['cohomology', 'equivariant', 'k-theory', 'dual-k-theory', 'ssm-nonequivariant', 'ssm'] as const;
 export type BuiltinTheory = (typeof BUILTIN_THEORIES)[number];
 
 /** Internal label of the horizontal edge inside the equivariant rhombus. */
@@ -33,6 +34,9 @@ const SPECS: Record<BuiltinTheory, PieceSpec[]> = {
   // Segre–Schwartz–MacPherson classes of Schubert cells at y = 0: both K-triangles, each weighing −1
   // (Knutson–Zinn-Justin 2021); checked against localization at y = 0 on every triple with n ≤ 6.
   'ssm-nonequivariant': [...COHOMOLOGY, K_UP, K_DOWN],
+  // Equivariant SSM classes: the y = 0 pieces plus crossing rhombi weighing ±(y_j − y_i)/(1 + y_j − y_i)
+  // (ssm-pieces.ts); checked against localization on every triple with n ≤ 6.
+  ssm: [...COHOMOLOGY, K_UP, K_DOWN, ...ssmCrossingPieces(RHOMBUS_LABEL)],
 };
 
 const cache = new Map<BuiltinTheory, PieceSet>();

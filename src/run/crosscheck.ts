@@ -9,6 +9,7 @@ import {
   integerSemiring,
   polynomialSemiring,
   polyTerms,
+  isBuiltinTheory,
   theoryPieceSet,
   triangleRegion,
   type PieceSet,
@@ -18,12 +19,20 @@ import { CodedError } from '../errors/index.js';
 import { grassmannianStrings } from '../reference/grassmannian-strings.js';
 import { isLocalizationTheory, localizationLetter, localizationValues, type LocalizationTheory } from './localization-values.js';
 import { referenceTable, type ReferenceTheory } from '../reference/crosscheck-tables.js';
+import { pointComparison, pointErrorBound, randomPoints } from './crosscheck-points.js';
 
 export interface CrosscheckOptions {
   readonly theory: ReferenceTheory | LocalizationTheory;
   readonly maxN: number;
   /** Checks this piece set against the theory's reference instead of the built-in one (e.g. a custom set). */
   readonly pieces?: PieceSet;
+  /**
+   * ssm and ssm-chern: compare exact values at this many random integer points instead of as rational
+   * functions (an identity test with `errorBound`; exact rational functions are out of reach at n = 6).
+   */
+  readonly points?: number;
+  /** Seed of the random points (default 1). */
+  readonly seed?: number;
   /** Called after each (λ, μ) pair with the pairs done and the pairs in all. */
   readonly onProgress?: (done: number, total: number) => void;
 }
@@ -51,6 +60,8 @@ export interface CrosscheckSummary {
   readonly agreements: number;
   readonly firstDisagreement: Disagreement | undefined;
   readonly seconds: number;
+  /** With `points`: how many, their seed, and the probability bound of a false agreement anywhere. */
+  readonly points?: { readonly count: number; readonly seed: number; readonly errorBound: number };
 }
 
 type Terms = readonly { readonly coefficient: bigint; readonly exponents: readonly number[] }[];
@@ -95,13 +106,15 @@ export function crosscheck(options: CrosscheckOptions): CrosscheckSummary {
   const started = performance.now();
   const theory = options.theory;
   if (isLocalizationTheory(theory)) {
-    if (!options.pieces) {
+    const pieces = options.pieces ?? (isBuiltinTheory(theory) ? theoryPieceSet(theory) : undefined);
+    if (!pieces) {
       throw new CodedError('invalid_argument', { what: '--pieces', expected: `a piece-set file to check against ${theory}`, received: 'none' }, {
         path: '--pieces',
         hint: `no puzzle rule for ${theory} is built in; the reference is localization`,
       });
     }
-    return crosscheckFractions(theory, options.pieces, options, started);
+    if (options.points !== undefined) return crosscheckAtPoints(theory, pieces, options, started);
+    return crosscheckFractions(theory, pieces, options, started);
   }
   const pieces = options.pieces ?? theoryPieceSet(theory);
   return compareTriples(theory, options, started, (k, n) => {
@@ -131,6 +144,17 @@ function crosscheckFractions(theory: LocalizationTheory, pieces: PieceSet, optio
       };
     };
   });
+}
+
+function crosscheckAtPoints(theory: LocalizationTheory, pieces: PieceSet, options: CrosscheckOptions, started: number): CrosscheckSummary {
+  const count = options.points!;
+  const seed = options.seed ?? 1;
+  if (theory === 'equivariant-k-theory' || !Number.isInteger(count) || count < 1) {
+    throw new CodedError('invalid_argument', { what: '--points', expected: 'a positive integer, with --theory ssm or ssm-chern', received: `${count} with ${theory}` }, { path: '--points', hint: 'equivariant K-theory is checked exactly' });
+  }
+  const kind = theory === 'ssm' ? 'ssm' : 'csm';
+  const summary = compareTriples(theory, options, started, (k, n) => pointComparison(kind, pieces, k, n, randomPoints(count, n, seed)));
+  return { ...summary, points: { count, seed, errorBound: pointErrorBound(options.maxN, count) } };
 }
 
 // What one triple's comparison says: nothing when engine and reference agree, both texts otherwise.

@@ -1,6 +1,8 @@
 import { divideFraction, fractionOf, type Fraction, type Polynomial, type StripLetter } from '../engine/index.js';
 import { CodedError } from '../errors/index.js';
 import type { Product } from '../products/expand-product.js';
+import type { Grassmannian } from '../products/partition-strings.js';
+import type { TableEntry } from '../products/structure-table.js';
 import { kLocalizationTable } from '../reference/k-localization.js';
 import type { RefFraction } from '../reference/ref-fraction.js';
 import type { RefLaurent } from '../reference/ref-laurent.js';
@@ -8,7 +10,7 @@ import { schwartzMacPhersonTable } from '../reference/ssm-localization.js';
 
 import type { LocalizationTheory } from './localization-theories.js';
 
-export { LOCALIZATION_THEORIES, isLocalizationTheory, type LocalizationTheory } from './localization-theories.js';
+export { LOCALIZATION_THEORIES, isLocalizationOnly, isLocalizationTheory, type LocalizationTheory } from './localization-theories.js';
 
 /** The letter of a theory's variables: t_m = e^{y_m} for equivariant K-theory, y_m otherwise. */
 export function localizationLetter(theory: LocalizationTheory): StripLetter {
@@ -83,4 +85,15 @@ export function localizationProduct(theory: LocalizationTheory, lambda: string, 
     .map(([key, value]) => ({ nu: key.slice(prefix.length), value: { type: 'fraction' as const, value, size: n, letter, variableNames: [] as string[] } }))
     .sort((a, b) => (a.nu < b.nu ? -1 : a.nu > b.nu ? 1 : 0));
   return { theory, lambda, mu, products };
+}
+
+/** Every nonzero structure constant of Gr(k, n) by localization, as `table` lists them (sorted by λ, μ, ν). */
+export function localizationTableRows(theory: LocalizationTheory, g: Grassmannian): TableEntry[] {
+  const letter = localizationLetter(theory);
+  const rows = [...localizationValues(theory, g.k, g.n)].map(([key, value]) => {
+    const [lambda, mu, nu] = key.split(',') as [string, string, string];
+    return { lambda, mu, nu, value: { type: 'fraction' as const, value, size: g.n, letter, variableNames: [] as string[] } };
+  });
+  const order = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+  return rows.sort((a, b) => order(a.lambda, b.lambda) || order(a.mu, b.mu) || order(a.nu, b.nu));
 }

@@ -9,7 +9,7 @@ import { classOptions, formOption } from '../class-options.js';
 import type { ValueForm } from '../../report/root-form.js';
 import { runCommand } from '../run-command.js';
 import { CodedError } from '../../errors/index.js';
-import { isLocalizationTheory, type LocalizationTheory } from '../../run/localization-theories.js';
+import { isLocalizationOnly, type LocalizationTheory } from '../../run/localization-theories.js';
 import { loadTheory } from '../load-theory.js';
 import { JSON_FORMAT_VERSION, valueJson } from '../../report/value-json.js';
 import type { RegionValue } from '../../claims/count-region.js';
@@ -67,14 +67,14 @@ export const countCommand: CommandModule<object, CountArgs> = {
   describe: 'Print the value of one boundary (the sum over its puzzles of the product of piece weights)',
   builder: (y) =>
     formOption(classOptions(y, 'λ,μ,ν'))
-      .option('theory', { type: 'string', demandOption: true, describe: "cohomology | equivariant | k-theory | dual-k-theory | ssm-nonequivariant | path to a piece-set JSON; triangles only: equivariant-k-theory | ssm | ssm-chern" })
+      .option('theory', { type: 'string', demandOption: true, describe: "cohomology | equivariant | k-theory | dual-k-theory | ssm-nonequivariant | ssm | path to a piece-set JSON; triangles only, by localization: equivariant-k-theory | ssm-chern" })
       .option('sides', { type: 'string', describe: "six clockwise side strings s1,…,s6; an empty side is '' or '-'" })
       .option('completed', { type: 'boolean', default: false, describe: 'count the completed triangle instead of the region itself' })
       .option('statistic', { type: 'string', describe: 'also count puzzles by their number of pieces of this kind (e.g. k-piece, equivariant)' })
       .option('json', { type: 'boolean', default: false, describe: 'print one JSON object' }) as never,
   handler: (args) =>
     runCommand(args.json, async () => {
-      if (isLocalizationTheory(args.theory)) {
+      if (isLocalizationOnly(args.theory)) {
         await countByLocalization(args.theory, args);
         return;
       }

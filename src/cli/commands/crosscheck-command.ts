@@ -14,6 +14,8 @@ interface CrosscheckArgs {
   theory: ReferenceTheory | LocalizationTheory;
   'max-n': number;
   pieces?: string;
+  points?: number;
+  seed?: number;
   json: boolean;
 }
 
@@ -25,18 +27,23 @@ function summaryText(s: CrosscheckSummary): string {
     '    n   k   triples  agreements',
     ...rows,
     `  all ${String(s.triples).padStart(13)} ${String(s.agreements).padStart(11)}   (${s.seconds.toFixed(1)} s)`,
+    ...(s.points
+      ? [`values compared exactly at ${s.points.count} random integer point${s.points.count === 1 ? '' : 's'} in [0, 2^64)^n (seed ${s.points.seed}); a false agreement anywhere has probability ≤ ${s.points.errorBound.toExponential(1)} (Schwartz–Zippel)`]
+      : []),
     d ? `first disagreement: λ=${d.lambda} μ=${d.mu} ν=${d.nu}\n  engine:    ${d.engine}\n  reference: ${d.reference}` : 'every triple agrees',
   ].join('\n');
 }
 
 export const crosscheckCommand: CommandModule<object, CrosscheckArgs> = {
   command: 'crosscheck',
-  describe: 'Compare the engine with independent computations (LR rule, localization, Grothendieck polynomials, Möbius inversion); equivariant-k-theory, ssm and ssm-chern need --pieces',
+  describe: 'Compare the engine with independent computations (LR rule, localization, Grothendieck polynomials, Möbius inversion); equivariant-k-theory and ssm-chern need --pieces',
   builder: (y) =>
     y
       .option('theory', { choices: THEORIES, demandOption: true, describe: 'which structure constants to check' })
       .option('max-n', { type: 'number', default: 5, describe: 'check every Gr(k, n) with n up to this' })
       .option('pieces', { type: 'string', describe: 'check this piece-set JSON file against the theory instead of the built-in pieces' })
+      .option('points', { type: 'number', describe: 'ssm, ssm-chern: compare exact values at this many random integer points instead of as rational functions (feasible at n = 6)' })
+      .option('seed', { type: 'number', describe: 'seed of the random points (default 1)' })
       .option('json', { type: 'boolean', default: false, describe: 'print the summary as JSON' }) as never,
   handler: (args) =>
     runCommand(args.json, () => {
@@ -50,6 +57,7 @@ export const crosscheckCommand: CommandModule<object, CrosscheckArgs> = {
         theory: args.theory,
         maxN,
         ...(args.pieces ? { pieces: resolveTheory(args.pieces) } : {}),
+        ...(args.points !== undefined ? { points: args.points, ...(args.seed !== undefined ? { seed: args.seed } : {}) } : {}),
         onProgress: (done, total) => {
           if (!bar) return;
           if (!started) bar.start(total, 0);

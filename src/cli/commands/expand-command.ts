@@ -7,7 +7,7 @@ import { valueText } from '../../report/value-json.js';
 import { parseClassArgs, triangleEchoLines } from '../boundary-args.js';
 import { classOptions, formOption } from '../class-options.js';
 import { runCommand } from '../run-command.js';
-import { isLocalizationTheory, localizationProduct } from '../../run/localization-values.js';
+import { isLocalizationOnly, localizationProduct } from '../../run/localization-values.js';
 
 interface ExpandArgs {
   theory: string;
@@ -23,14 +23,14 @@ export const expandCommand: CommandModule<object, ExpandArgs> = {
   describe: 'Expand a whole product σ_λ·σ_μ: every ν with a nonzero structure constant, from one sweep',
   builder: (y) =>
     formOption(classOptions(y, 'λ,μ'))
-      .option('theory', { type: 'string', demandOption: true, describe: 'cohomology | equivariant | k-theory | dual-k-theory | ssm-nonequivariant | path to a piece-set JSON; by localization: equivariant-k-theory | ssm | ssm-chern' })
+      .option('theory', { type: 'string', demandOption: true, describe: 'cohomology | equivariant | k-theory | dual-k-theory | ssm-nonequivariant | ssm | path to a piece-set JSON; by localization: equivariant-k-theory | ssm-chern' })
       .option('json', { type: 'boolean', default: false, describe: 'print one JSON object' }) as never,
   handler: (args) =>
     runCommand(args.json, () => {
       const echo = parseClassArgs(args, 2);
       const [lambda, mu] = echo.strings as [string, string];
       // Theories without a built-in puzzle rule are expanded by localization.
-      const product = isLocalizationTheory(args.theory) ? localizationProduct(args.theory, lambda, mu) : expandProduct(resolveTheory(args.theory), lambda, mu);
+      const product = isLocalizationOnly(args.theory) ? localizationProduct(args.theory, lambda, mu) : expandProduct(resolveTheory(args.theory), lambda, mu);
       if (args.json) {
         process.stdout.write(`${JSON.stringify(productJson(product, args.form, echo.grassmannian))}\n`);
         return;

@@ -146,7 +146,9 @@ export function fractionText(a: Fraction, names: (k: number) => string): string 
   }
   const mono = a.low.flatMap((e, k) => (e === 0 ? [] : [e === 1 ? names(k) : `${names(k)}^${e}`]));
   const atoms = [...a.atoms.values()].map((v) => `(${polyText(v.poly, names)})${v.exp > 1 ? `^${v.exp}` : ''}`);
-  return `(${polyText(a.num, names)}) / ${[...mono, ...atoms].join('*')}`;
+  // A product of several factors is parenthesised whole: `a / (b*c)`, never read as `(a / b)*c`.
+  const den = [...mono, ...atoms];
+  return `(${polyText(a.num, names)}) / ${den.length === 1 ? den[0] : `(${den.join('*')})`}`;
 }
 
 function laurentText(a: Fraction, names: (k: number) => string): string {

@@ -35,6 +35,12 @@ describe('engine against independent references', () => {
     expect(s.firstDisagreement).toBeUndefined();
   });
 
+  it('equivariant SSM: the built-in pieces (y = 0 pieces plus crossing rhombi ±χ/(1 + χ)) = localization on every triple with n ≤ 5 [Aluffi–Mihalcea operator, Compositio 2016; s_SM = c_SM / c(T Gr)]', () => {
+    const s = crosscheck({ theory: 'ssm', maxN: 5 });
+    expect(s.triples).toBe(tripleCount(5));
+    expect(s.firstDisagreement).toBeUndefined();
+  });
+
   it('a custom Laurent piece set is checked against equivariant K-theory by localization, and a wrong one is caught', () => {
     // c_{010,010}^{100} = t2/t3 by localization (isobaric divided differences), while this demo set gives 1.
     const s = crosscheck({ theory: 'equivariant-k-theory', maxN: 4, pieces: resolveTheory('conjectures/pieces/laurent-weights-demo.json') });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fractionEquals, fractionSemiring } from '../../../src/engine/index.js';
-import { localizationValue } from '../../../src/run/localization-values.js';
+import { localizationTableRows, localizationValue } from '../../../src/run/localization-values.js';
 
 describe('structure constants by localization', () => {
   it('equivariant K-theory of P²: [O_line]² = (1 − t2/t3)[O_line] + (t2/t3)[O_pt]', () => {
@@ -21,6 +21,20 @@ describe('structure constants by localization', () => {
     // at 10, 1 = d'·1 + d·χ, so d = 1: c_SM(C)² = (1 − χ)c_SM(C) + c_SM(pt).
     expect(fractionEquals(localizationValue('ssm-chern', '01', '01', '10'), R.one)).toBe(true);
     expect(fractionEquals(localizationValue('ssm-chern', '01', '01', '01'), R.add(R.one, R.mul(R.fromInteger(-1), chi)))).toBe(true);
+  });
+
+  it('lists the c_SM table of P¹ sorted by λ, μ, ν with the values solved by hand', () => {
+    // By hand from the restrictions above: c(C)·c(pt) vanishes at 01 and is χ at 10, so it is c(pt);
+    // c(pt)² = χ² at 10 = χ·c(pt)|_10, so it is χ·c(pt).
+    const R = fractionSemiring(2, 'y');
+    const chi = R.position(1, 2);
+    const rows = localizationTableRows('ssm-chern', { k: 1, n: 2 });
+    expect(rows.map((r) => `${r.lambda},${r.mu},${r.nu}`)).toEqual(['01,01,01', '01,01,10', '01,10,10', '10,01,10', '10,10,10']);
+    const expected = [R.add(R.one, R.mul(R.fromInteger(-1), chi)), R.one, R.one, R.one, chi];
+    rows.forEach((r, i) => {
+      expect(r.value.type).toBe('fraction');
+      if (r.value.type === 'fraction') expect(fractionEquals(r.value.value, expected[i]!)).toBe(true);
+    });
   });
 
   it('refuses classes of different Grassmannians', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fractionSemiring, fractionTerms, modularSemiring } from '../../../../src/engine/index.js';
+import { fractionSemiring, fractionTerms, fractionText, modularSemiring } from '../../../../src/engine/index.js';
 import { CodedError } from '../../../../src/errors/index.js';
 
 // Field identities of ℚ(t) [common practice, no source].
@@ -21,6 +21,14 @@ describe('exact fractions', () => {
     expect(R.equals(sub(a, b), R.one)).toBe(true);
     expect(R.isZero(sub(R.add(a, b), R.divide!(sub(t(1), R.fromInteger(-1)), sub(R.one, t(1)))))).toBe(true);
     expect(R.equals(R.divide!(R.one, sub(t(2), t(1))), R.divide!(R.fromInteger(-1), sub(t(1), t(2))))).toBe(true);
+  });
+
+  it('writes a denominator of several factors in parentheses, so the text reads as the value', () => {
+    const Y = fractionSemiring(3, 'y');
+    const f = (i: number, j: number) => Y.add(Y.one, Y.position(i, j));
+    const v = Y.mul(Y.divide!(Y.fromInteger(-1), f(1, 2)), Y.divide!(Y.one, f(1, 3)));
+    expect(fractionText(v, (k) => `y${k + 1}`)).toBe('(-1) / ((y2 - y1 + 1)*(y3 - y1 + 1))');
+    expect(fractionText(Y.divide!(Y.one, f(1, 2)), (k) => `y${k + 1}`)).toBe('(1) / (y2 - y1 + 1)');
   });
 
   it('refuses division by zero with a coded error', () => {
