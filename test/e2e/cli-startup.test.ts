@@ -40,8 +40,8 @@ describe('CLI start-up shortcuts keep the output', () => {
 
   it('counts a localization-only theory, whose references count-command now loads on demand', () => {
     // Which value is right is crosscheck's business (test/math); here: the lazily loaded path runs and says so.
-    const r = cli(['count', '--theory', 'ssm', '--triangle', '0101,0101,1001', '--json']);
+    const r = cli(['count', '--theory', 'ssm-chern', '--triangle', '0101,0101,1001', '--json']);
     expect(r.status).toBe(0);
-    expect(JSON.parse(r.stdout)).toMatchObject({ theory: 'ssm', source: 'localization', puzzles: null });
+    expect(JSON.parse(r.stdout)).toMatchObject({ theory: 'ssm-chern', source: 'localization', puzzles: null });
   });
 });
