@@ -16,6 +16,9 @@ export interface CommandLineSpec {
 const camel = (s: string) => s.replace(/-([a-z])/g, (_, c: string) => c.toUpperCase());
 const kebab = (s: string) => s.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
 
+// A negative number is a value, as yargs reads it.
+const isFlag = (t: string) => t.startsWith('-') && t !== '-' && !/^-\d/.test(t);
+
 function positionals(usage: string): { name: string; required: boolean; variadic: boolean }[] {
   return [...usage.matchAll(/([<[])([^>\]]+?)(\.\.)?[>\]]/g)].map((m) => ({ name: m[2]!, required: m[1] === '<', variadic: m[3] !== undefined }));
 }
@@ -43,7 +46,7 @@ export function commandLineError(tokens: readonly string[], commands: readonly s
   const words: string[] = [];
   for (let i = 0; i < before.length; i++) {
     const t = before[i]!;
-    if (!t.startsWith('-') || t === '-') {
+    if (!isFlag(t)) {
       words.push(t);
       continue;
     }
@@ -58,7 +61,7 @@ export function commandLineError(tokens: readonly string[], commands: readonly s
     if (spec.booleans.includes(key)) continue;
     const values: string[] = [];
     if (m[2] !== undefined) values.push(m[2]);
-    else if (spec.arrays.includes(key)) while (i + 1 < before.length && !before[i + 1]!.startsWith('-')) values.push(before[++i]!);
+    else if (spec.arrays.includes(key)) while (i + 1 < before.length && !isFlag(before[i + 1]!)) values.push(before[++i]!);
     else if (i + 1 < before.length && !before[i + 1]!.startsWith('--')) values.push(before[++i]!);
     for (const v of values) {
       if (spec.numbers.includes(key) && (v.trim() === '' || !Number.isFinite(Number(v)))) return new CodedError('invalid_option_value', { flag, type: 'a number', received: `'${v}'` }, { path: flag });

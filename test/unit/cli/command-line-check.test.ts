@@ -25,6 +25,7 @@ describe('command-line refusals (what yargs refuses), coded and naming the flag'
     expect(await check(['count', '--theory', 'cohomology', '--triangle', '01,01,10', '--json', '--no-completed'])).toBeUndefined();
     expect(await check(['run', 'a.json', 'b.json', '--max', 'n=3', 'm=2', '--workers', '2'])).toBeUndefined();
     expect(await check(['--help'])).toBeUndefined();
+    expect(await check(['run', 'a.json', '--time-limit', '-1'])).toBeUndefined(); // refused later, by run's own check
     expect(await check(['discover', 'family.json', '--theory', 'cohomology'])).toBeUndefined();
     expect(await check(['replay', 'c.json', '--instance', 'n=2:0'])).toBeUndefined();
   });
