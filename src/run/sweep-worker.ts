@@ -5,7 +5,8 @@ import type { SizeClass } from '../claims/claim-api.js';
 import { claimCompileCounts } from '../claims/compile-counts.js';
 import { CodedError } from '../errors/index.js';
 import { evaluateChunk } from './evaluate-chunk.js';
-import { importClaimRuntime, type ClaimRuntime } from './claim-runtime-module.js';
+import * as claimRuntime from './claim-runtime.js';
+import { importClaimRuntime, type ClaimRuntime, type ClaimRuntimeModule } from './claim-runtime-module.js';
 import { serializeError } from './serialize-error.js';
 import type { ChunkResult, ChunkTask, ConfirmTask, WorkerReply, WorkerTask } from './worker-task.js';
 
@@ -18,11 +19,14 @@ interface Loaded {
 const loaded = new Map<string, Promise<Loaded>>();
 
 function load(task: WorkerTask): Promise<Loaded> {
-  const module = task.runtimeModule ?? new URL('./claim-runtime.js', import.meta.url).href;
-  const key = `${module}\n${task.fingerprint}\n${task.exact}\n${JSON.stringify(task.max)}`;
+  // The real runtime is imported statically (loaded while the worker starts, and one copy of every module
+  // in the worker's bundle); a test double comes by URL.
+  const module = task.runtimeModule;
+  const key = `${module ?? '(claims runtime)'}\n${task.fingerprint}\n${task.exact}\n${JSON.stringify(task.max)}`;
   let entry = loaded.get(key);
   if (!entry) {
-    entry = importClaimRuntime(module).then((m) => {
+    const runtime: Promise<ClaimRuntimeModule> = module !== undefined ? importClaimRuntime(module) : Promise.resolve(claimRuntime);
+    entry = runtime.then((m) => {
       const runtime = m.createClaimRuntime(task.canonicalJson, { exact: task.exact }, task.max);
       const classes = new Map(runtime.plan.classes(task.max).map((c) => [c.key, c]));
       return { runtime, classes };

@@ -1,3 +1,5 @@
+import { existsSync } from 'node:fs';
+import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Piscina } from 'piscina';
 import { CodedError } from '../errors/index.js';
@@ -7,11 +9,12 @@ import type { WorkerReply, WorkerTask } from './worker-task.js';
 export const MAX_ATTEMPTS = 3;
 
 // The worker always runs compiled JavaScript: under vitest this module is a .ts source in src/, so point at dist/.
+// The build's one-file bundle of the worker (scripts/bundle-worker.mjs) starts faster than ~60 modules.
 function workerEntryUrl(): string {
   const here = fileURLToPath(import.meta.url);
-  if (!here.endsWith('.ts')) return new URL('./sweep-worker.js', import.meta.url).href;
-  const distFile = here.replace(/[\\/]src[\\/]run[\\/][^\\/]+\.ts$/, '/dist/run/sweep-worker.js');
-  return pathToFileURL(distFile).href;
+  const dir = here.endsWith('.ts') ? here.replace(/[\\/]src[\\/]run[\\/][^\\/]+\.ts$/, '/dist/run') : dirname(here);
+  const bundle = join(dir, 'sweep-worker.bundle.js');
+  return pathToFileURL(existsSync(bundle) ? bundle : join(dir, 'sweep-worker.js')).href;
 }
 
 /** A piscina pool that retries a task whose worker died, a bounded number of times. */

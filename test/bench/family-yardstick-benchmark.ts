@@ -6,6 +6,7 @@
  * `npm run bench -- family-yardstick`.
  */
 import { spawnSync } from 'node:child_process';
+import Database from 'better-sqlite3';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -66,9 +67,14 @@ export default async function familyYardstickBenchmark(): Promise<string> {
     for (let a = 1; a <= 4; a++) for (let b = 1; b <= 3; b++) smallSpec.push(`${a},${b},0,${a},${b},0`);
     let n = 0;
     const sweep = (file: string, workers: number) => {
-      const r = timed(['node', cli, 'run', file, '--workers', String(workers), '--db', join(dir, `store-${n++}.sqlite`), '--json']);
+      const db = join(dir, `store-${n++}.sqlite`);
+      const r = timed(['node', cli, 'run', file, '--workers', String(workers), '--db', db, '--json']);
       const c = r.status === 0 ? (JSON.parse(r.out) as { claims: { instancesChecked: number; holds: number }[] }).claims[0]! : undefined;
-      return { ...r, checked: c?.instancesChecked ?? 0, holds: c?.holds ?? 0 };
+      // Worker time inside chunks (the sweep's own work), as each chunk's row records it.
+      const store = new Database(db, { readonly: true });
+      const chunks = store.prepare('SELECT count(*) AS n, coalesce(sum(duration_ms), 0) AS ms FROM chunks').get() as { n: number; ms: number };
+      store.close();
+      return { ...r, checked: c?.instancesChecked ?? 0, holds: c?.holds ?? 0, chunks: chunks.n, chunkMs: chunks.ms };
     };
     const reps = 3;
     // Alternate 1 and 2 workers, so a change in the machine's load hits both alike.
@@ -88,12 +94,19 @@ export default async function familyYardstickBenchmark(): Promise<string> {
     const smallPlain = median([0, 1, 2].map(() => timed(['python3', python, 'plain', 'cohomology', smallSpec.join(';'), '1', '4'])));
     const smallBatched = median([0, 1, 2].map(() => timed(['python3', python, 'family', 'cohomology', smallSpec.join(';'), '1', '4'])));
     loads.push(loadavg()[0]!.toFixed(1));
+    // A family where the sweep itself dominates start-up: the 7×7 parallelogram (11,778,624 labelings), no Python.
+    const seven = claim(dir, 'seven', [7, 7, 0, 7, 7, 0], []);
+    const sevenRuns: { 1: ReturnType<typeof sweep>[]; 2: ReturnType<typeof sweep>[] } = { 1: [], 2: [] };
+    for (let i = 0; i < 2; i++) for (const w of [1, 2] as const) sevenRuns[w].push(sweep(seven, w));
+    const seven1 = [...sevenRuns[1]].sort((a, b) => a.wall - b.wall)[0]!;
+    const seven2 = [...sevenRuns[2]].sort((a, b) => a.wall - b.wall)[0]!;
+    loads.push(loadavg()[0]!.toFixed(1));
     const pyChecked = (r: Run) => (r.out ? (JSON.parse(r.out) as { checked: number }).checked : 0);
 
     const lines = [
       '## Family sweeps against the Python yardstick (test/bench/family-yardstick-benchmark.ts)',
       '',
-      `Whole processes under \`/usr/bin/time\`, same run; CPU = user + system of every thread; peak = maximum resident set. \`run\` sweeps into a fresh store (\`--json\`); runs of \`run\` are medians of ${reps} (6×6) or 5 (2,744), 1 and 2 workers alternating. Load average (1 min) at the start, after the 6×6 runs, after Python and at the end: ${loads.join(', ')} on 2 cores.`,
+      `Whole processes under \`/usr/bin/time\`, same run; CPU = user + system of every thread; peak = maximum resident set. \`run\` sweeps into a fresh store (\`--json\`); runs of \`run\` are medians of ${reps} (6×6) or 5 (2,744), 1 and 2 workers alternating. Load average (1 min) at the start, after the 6×6 runs, after Python, after the 7×7 runs and at the end: ${loads.join(', ')} on 2 cores.`,
       'Claim: "exchanging sides 1 and 4 keeps the cohomology value", sides 1, 4 and sides 2, 5 of equal content. Python: `python-dp.py family` (batched: one open-bottom DP per top part) and `python-dp.py plain` (one closed DP for b and one for T(b) per labeling).',
       '',
       '| case | labelings | holds | wall s | CPU s | peak MB |',
@@ -106,11 +119,15 @@ export default async function familyYardstickBenchmark(): Promise<string> {
       `| 2,744: \`run\`, 2 workers | ${small2.checked} | ${small2.holds} | ${s(small2.wall)} | ${s(small2.cpu)} | ${small2.rssMB} |`,
       `| 2,744: Python, plain loop | ${pyChecked(smallPlain)} | | ${s(smallPlain.wall)} | ${s(smallPlain.cpu)} | ${smallPlain.rssMB} |`,
       `| 2,744: Python, batched family loop | ${pyChecked(smallBatched)} | | ${s(smallBatched.wall)} | ${s(smallBatched.cpu)} | ${smallBatched.rssMB} |`,
+      `| 7×7: \`run\`, 1 worker (faster of 2) | ${seven1.checked} | ${seven1.holds} | ${s(seven1.wall)} | ${s(seven1.cpu)} | ${seven1.rssMB} |`,
+      `| 7×7: \`run\`, 2 workers (faster of 2) | ${seven2.checked} | ${seven2.holds} | ${s(seven2.wall)} | ${s(seven2.cpu)} | ${seven2.rssMB} |`,
       `| \`node -e 0\` | | | ${s(bare.wall)} | ${s(bare.cpu)} | ${bare.rssMB} |`,
       '',
       `- 6×6, \`run\` (1 worker) against the batched Python loop: ${ratio(sixPy.cpu, six1.cpu)} in CPU, ${ratio(sixPy.wall, six1.wall)} in wall time (goal ≥ 10×); peak ${six1.rssMB} MB with 1 worker, ${six2.rssMB} MB with 2 (goal ≤ 300 MB).`,
       `- 2 workers against 1 on the 6×6 sweep: ${ratio(six1.wall, six2.wall)} in wall time (goal ≥ 1.8×); CPU ${s(six1.cpu)} s against ${s(six2.cpu)} s. Wall times of the ${reps} runs, 1 worker: ${sixRuns[1].map((r) => s(r.wall)).join(', ')}; 2 workers: ${sixRuns[2].map((r) => s(r.wall)).join(', ')}.`,
+      `- 2 workers against 1 on the 7×7 sweep (11.8 M labelings, where the sweep outweighs start-up): ${ratio(seven1.wall, seven2.wall)} in wall time; worker time inside chunks ${(seven1.chunkMs / 1000).toFixed(2)} s (1 worker) and ${(seven2.chunkMs / 1000).toFixed(2)} s (2 workers, summed over both).`,
       `- 2,744, \`run\` (1 worker) against the plain Python loop: ${ratio(smallPlain.cpu, small1.cpu)} in CPU, ${ratio(smallPlain.wall, small1.wall)} in wall time (goal ≥ 3×, well under a second); against the batched loop ${ratio(smallBatched.cpu, small1.cpu)} in CPU.`,
+      `- Worker time inside chunks (the sweep proper, summed over the chunks' rows): 6×6 ${(six1.chunkMs / 1000).toFixed(2)} s in ${six1.chunks} chunks with 1 worker, ${(six2.chunkMs / 1000).toFixed(2)} s in ${six2.chunks} chunks with 2; 2,744 ${(small1.chunkMs / 1000).toFixed(2)} s in ${small1.chunks} chunks. The rest of a run's CPU is start-up and the store.`,
       `- Where the 6×6 sweep's CPU goes: a bare Node process ${s(bare.cpu)} s; the engine's tables for the whole family with Node's start (\`family-case.mjs\`) ${s(sixEngine.cpu)} s; \`run\` adds the CLI, the claim's compilation, the store and a worker thread that loads the claims and engine modules itself: ${s(six1.cpu - sixEngine.cpu)} s more.`,
     ];
     return lines.join('\n');
