@@ -24,7 +24,7 @@ describe('built-in theories', () => {
   });
 
   it('rejects an unknown theory, listing the valid names', () => {
-    expect(() => theoryPieceSet('k-thery')).toThrow(/expected one of 'cohomology' \| 'equivariant' \| 'k-theory' \| 'dual-k-theory' \| 'ssm-nonequivariant', received 'k-thery'/);
+    expect(() => theoryPieceSet('k-thery')).toThrow(/expected one of 'cohomology' \| 'equivariant' \| 'k-theory' \| 'dual-k-theory' \| 'ssm-nonequivariant' \| 'ssm', received 'k-thery'/);
   });
 });
 
