@@ -1,4 +1,4 @@
-import { countCompletions, pointSemiring, triangleRegion, type PieceSet, type PointValue } from '../engine/index.js';
+import { countCompletions, pointFraction, pointSemiring, triangleRegion, type PieceSet } from '../engine/index.js';
 import { grassmannianStrings } from '../reference/grassmannian-strings.js';
 import { pointDegreeBound, schwartzMacPhersonAtPoint, type PointRational } from '../reference/ssm-at-point.js';
 
@@ -27,7 +27,7 @@ export function randomPoints(count: number, n: number, seed: number): bigint[][]
   return Array.from({ length: count }, () => Array.from({ length: n }, () => next()));
 }
 
-const text = (v: PointRational | PointValue) => (v.den === 1n ? `${v.num}` : `${v.num}/${v.den}`);
+const text = (v: PointRational) => (v.den === 1n ? `${v.num}` : `${v.num}/${v.den}`);
 
 /**
  * For Gr(k, n): a comparison of the piece set's values with localization (s_SM or c_SM) at each point;
@@ -37,8 +37,8 @@ export function pointComparison(kind: 'ssm' | 'csm', pieces: PieceSet, k: number
   const references = points.map((y) => schwartzMacPhersonAtPoint(kind, k, n, y));
   return (lambda: string, mu: string) => {
     const engines = points.map((y) => {
-      const out = new Map<string, PointValue>();
-      for (const [side5, v] of countCompletions(triangleRegion(n), [lambda, '', mu, '', null, ''], pieces, { semiring: pointSemiring(y) })) out.set([...side5].reverse().join(''), v);
+      const out = new Map<string, PointRational>();
+      for (const [side5, v] of countCompletions(triangleRegion(n), [lambda, '', mu, '', null, ''], pieces, { semiring: pointSemiring(y) })) out.set([...side5].reverse().join(''), pointFraction(v));
       return out;
     });
     return (nu: string): { engine: string; reference: string } | undefined => {

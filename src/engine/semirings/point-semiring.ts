@@ -1,12 +1,16 @@
 import type { Semiring } from '../semiring.js';
 import { CodedError } from '../../errors/index.js';
 
-/** An exact rational number num/den, den > 0, gcd(num, den) = 1. */
+/**
+ * An exact rational number num / Π atom^e: the denominator is kept as the integers divided by (positive,
+ * with multiplicities), so adding two values brings them to common multiplicities without any gcd.
+ */
 export interface PointValue {
   readonly num: bigint;
-  readonly den: bigint;
+  readonly den: ReadonlyMap<bigint, number>;
 }
 
+const NONE: ReadonlyMap<bigint, number> = new Map();
 const abs = (a: bigint) => (a < 0n ? -a : a);
 function gcd(a: bigint, b: bigint): bigint {
   let [x, y] = [abs(a), abs(b)];
@@ -14,10 +18,44 @@ function gcd(a: bigint, b: bigint): bigint {
   return x;
 }
 
-function reduced(num: bigint, den: bigint): PointValue {
-  if (num === 0n) return { num: 0n, den: 1n };
-  const g = gcd(num, den) * (den < 0n ? -1n : 1n);
-  return g === 1n ? { num, den } : { num: num / g, den: den / g };
+function denominator(v: PointValue): bigint {
+  let d = 1n;
+  for (const [atom, e] of v.den) for (let q = 0; q < e; q++) d *= atom;
+  return d;
+}
+
+/** The value as a reduced fraction num/den, den > 0. */
+export function pointFraction(v: PointValue): { num: bigint; den: bigint } {
+  const den = denominator(v);
+  const g = gcd(v.num, den);
+  return v.num === 0n ? { num: 0n, den: 1n } : { num: v.num / g, den: den / g };
+}
+
+// a.num scaled to the denominator `to` (which contains a's).
+function scaled(a: PointValue, to: ReadonlyMap<bigint, number>): bigint {
+  let num = a.num;
+  for (const [atom, e] of to) for (let q = a.den.get(atom) ?? 0; q < e; q++) num *= atom;
+  return num;
+}
+
+function add(a: PointValue, b: PointValue): PointValue {
+  if (b.num === 0n) return a;
+  if (a.num === 0n) return b;
+  if (a.den.size === 0 && b.den.size === 0) return { num: a.num + b.num, den: NONE };
+  const den = new Map(a.den);
+  for (const [atom, e] of b.den) den.set(atom, Math.max(e, den.get(atom) ?? 0));
+  const num = scaled(a, den) + scaled(b, den);
+  return num === 0n ? { num: 0n, den: NONE } : { num, den };
+}
+
+function mul(a: PointValue, b: PointValue): PointValue {
+  const num = a.num * b.num;
+  if (num === 0n) return { num: 0n, den: NONE };
+  if (b.den.size === 0) return { num, den: a.den };
+  if (a.den.size === 0) return { num, den: b.den };
+  const den = new Map(a.den);
+  for (const [atom, e] of b.den) den.set(atom, e + (den.get(atom) ?? 0));
+  return { num, den };
 }
 
 /**
@@ -31,15 +69,15 @@ export function pointSemiring(coordinates: readonly bigint[]): Semiring<PointVal
     if (c === undefined) throw new CodedError('invalid_argument', { what: 'Point coordinate', expected: `a value for strip ${m}`, received: `${coordinates.length} coordinates` });
     return c;
   };
-  const of = (v: bigint): PointValue => ({ num: v, den: 1n });
+  const of = (v: bigint): PointValue => ({ num: v, den: NONE });
   return {
     name: 'point',
     zero: of(0n),
     one: of(1n),
-    add: (a, b) => (a.den === b.den ? reduced(a.num + b.num, a.den) : reduced(a.num * b.den + b.num * a.den, a.den * b.den)),
-    mul: (a, b) => reduced(a.num * b.num, a.den * b.den),
+    add,
+    mul,
     isZero: (a) => a.num === 0n,
-    equals: (a, b) => a.num === b.num && a.den === b.den,
+    equals: (a, b) => scaled(a, NONE) * denominator(b) === b.num * denominator(a),
     fromInteger: (n) => of(BigInt(n)),
     variable(name) {
       throw new CodedError('invalid_argument', { what: 'Point value', expected: 'a piece set without named parameters', received: `parameter '${name}'` }, { path: 'theory' });
@@ -50,8 +88,14 @@ export function pointSemiring(coordinates: readonly bigint[]): Semiring<PointVal
       if (b.num === 0n) {
         throw new CodedError('division_by_zero', { what: 'Weight quotient', expected: 'a denominator that is nonzero at the point', received: '0' }, { path: 'weight.formula', hint: 'choose another point' });
       }
-      return reduced(a.num * b.den, a.den * b.num);
+      // a / (b.num / D_b) = a·D_b / b.num; b.num joins the denominator's atoms, its sign goes up.
+      const atom = abs(b.num);
+      const top = mul(a, { num: denominator(b) * (b.num < 0n ? -1n : 1n), den: NONE });
+      return atom === 1n ? top : mul(top, { num: 1n, den: new Map([[atom, 1]]) });
     },
-    toText: (a) => (a.den === 1n ? `${a.num}` : `${a.num}/${a.den}`),
+    toText: (a) => {
+      const f = pointFraction(a);
+      return f.den === 1n ? `${f.num}` : `${f.num}/${f.den}`;
+    },
   };
 }

@@ -41,6 +41,20 @@ describe('engine against independent references', () => {
     expect(s.firstDisagreement).toBeUndefined();
   });
 
+  it('equivariant SSM at n = 6: the built-in pieces = localization at two random integer points on every triple with n ≤ 6 [Schwartz–Zippel identity test; exact rationals]', () => {
+    const s = crosscheck({ theory: 'ssm', maxN: 6, points: 2, seed: 7 });
+    expect(s.triples).toBe(tripleCount(6));
+    expect(s.firstDisagreement).toBeUndefined();
+    expect(s.points!.errorBound).toBeLessThan(1e-20);
+  });
+
+  it('the point test catches a wrong SSM rule: one crossing rhombus of the wrong sign', () => {
+    const ssm = resolveTheory('ssm');
+    const wrong = { ...ssm, pieces: ssm.pieces.map((p) => (p.name === 'ssm-rhombus-10.10.0.1' ? { ...p, weight: { type: 'integer' as const, value: 1 } } : p)) };
+    const s = crosscheck({ theory: 'ssm', maxN: 4, points: 1, pieces: wrong });
+    expect(s.agreements).toBeLessThan(s.triples);
+  });
+
   it('a custom Laurent piece set is checked against equivariant K-theory by localization, and a wrong one is caught', () => {
     // c_{010,010}^{100} = t2/t3 by localization (isobaric divided differences), while this demo set gives 1.
     const s = crosscheck({ theory: 'equivariant-k-theory', maxN: 4, pieces: resolveTheory('conjectures/pieces/laurent-weights-demo.json') });
