@@ -103,7 +103,7 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
         const left = formula.left ? formula.side(formula.left, sides, cls.variables, cache) : leftMeter.value(lengths, sides, 'exact', undefined, cache);
         if (claim.family.nonzeroOnly && isZeroValue(left)) return { left };
         const right = formula.side(formula.right, sides, cls.variables, cache);
-        return { left, right, compared: right };
+        return { left, right, compared: sigma ? substituteValue(right, sigma) : right };
       }
       const left = leftMeter.value(lengths, sides, mode, undefined, cache, attempt);
       // A zero left value is skipped, unless it stands for its partner too, whose value is the right one here.

@@ -4,7 +4,8 @@ import type { CheckContext } from '../compile-context.js';
 import { hasIntegerWeights } from '../resolve-theory.js';
 import { compileFormula, type CompiledFormula } from './compile-formula.js';
 
-const RELATIONS = ['equal', 'lessOrEqual', 'greaterOrEqual'];
+// The right side may be compared after a permutation of the strip variables, as for a transform.
+const RELATIONS = ['equal', 'lessOrEqual', 'greaterOrEqual', 'equalAfterSubstitution', 'equalUpToPermutation'];
 
 /** The meaning checks of `compare.formula`, then its compiled form; undefined when the claim has none. */
 export function checkFormula(claim: Claim, ctx: CheckContext, ranges: Ranges): CompiledFormula | undefined {

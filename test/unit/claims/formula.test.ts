@@ -130,3 +130,31 @@ describe('formula claims: polynomial theories', () => {
     expect(r.status).toBe('holds');
   });
 });
+
+describe('formula claims compared after a permutation of y', () => {
+  // The exchange of sides 1 and 4 of (a,0,b,a,0,b) keeps the equivariant value up to reversing
+  // y_(b+1)..y_(a+b) (the rule of issue 12's checks, value from memory there); written as a formula.
+  const exchange = (relation: object) =>
+    parseClaim({
+      id: 'formula-substitution',
+      statement: 's',
+      theory: 'equivariant',
+      family: { sides: ['a', 0, 'b', 'a', 0, 'b'], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }], conditions: [{ type: 'sameContent', sides: [1, 4] }] },
+      transform: [],
+      compare: { measure: { type: 'value' }, relation, formula: { left: [{ product: [{ sides: ['s1', 's2', 's3', 's4', 's5', 's6'] }] }], right: [{ product: [{ sides: ['s4', 's2', 's3', 's1', 's5', 's6'] }] }] } },
+    });
+  const statuses = (relation: object) => {
+    const claim = exchange(relation);
+    const plan = planClaim(claim);
+    const ev = createEvaluator(claim, { exact: true });
+    const out: string[] = [];
+    for (const cls of plan.classes()) for (let i = 0n; i < plan.instanceCount(cls); i++) out.push(ev.evaluate(plan.instanceAt(cls, i)).status);
+    return out;
+  };
+
+  it('holds with the block reversal applied to the right side, fails as a plain equality', () => {
+    expect(statuses({ type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 'b+1', to: 'a+b' }] }).every((s) => s === 'holds')).toBe(true);
+    expect(statuses({ type: 'equal' }).some((s) => s === 'fails')).toBe(true);
+    expect(statuses({ type: 'equalUpToPermutation', searchSpace: 'allPermutations' }).every((s) => s === 'holds')).toBe(true);
+  });
+});
