@@ -28,6 +28,10 @@ function claimText(c: ClaimSummary): string[] {
   ];
   if (c.method === 'modular' && c.instancesChecked > 0) lines.push(`  modular comparisons: chance of a false "holds" ≤ ${c.errorBound.toExponential(2)} (use --exact to avoid)`);
   if (c.rechecked.checked) lines.push(`  re-checked ${c.rechecked.checked} stored counterexample${c.rechecked.checked === 1 ? '' : 's'}: ${c.rechecked.stillFail} still fail${c.rechecked.nowHold ? `, ${c.rechecked.nowHold} NOW HOLD (stored result doubtful)` : ''}`);
+  if (c.rechecked.partnersStored) {
+    const n = c.rechecked.partnersStored;
+    lines.push(`  stored ${n} failing partner${n === 1 ? '' : 's'} T(b) that an older store had counted as holding`);
+  }
   if (c.overturned) lines.push(`  ${c.overturned} modular "fails" were overturned by exact recomputation`);
   lines.push('  classes:');
   for (const k of c.classes) {

@@ -3,7 +3,8 @@ import type { CounterexampleRecord } from '../store/index.js';
 import { intersectPermutations } from '../store/permutation-records.js';
 import type { ChunkResult } from './worker-task.js';
 
-function counterexample(cls: SizeClass, r: InstanceResult, partnerOf?: bigint): CounterexampleRecord {
+/** The stored row of a confirmed failing boundary (`partnerOf`: found through its pair's representative). */
+export function counterexampleRecord(cls: SizeClass, r: InstanceResult, partnerOf?: bigint): CounterexampleRecord {
   return {
     classKey: cls.key,
     index: r.index,
@@ -47,7 +48,7 @@ export function evaluateChunk(plan: ClaimPlan, evaluator: Evaluator, cls: SizeCl
       const c = failing();
       if (c) {
         out.fails++;
-        counterexamples.push(counterexample(cls, c, partnerOf));
+        counterexamples.push(counterexampleRecord(cls, c, partnerOf));
       } else {
         out.overturned++;
         held(false);

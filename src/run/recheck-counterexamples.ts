@@ -1,6 +1,6 @@
 import type { SizeClass } from '../claims/claim-api.js';
 import { CodedError } from '../errors/index.js';
-import { counterexampleKeys, recordRecheck, type Store } from '../store/index.js';
+import { counterexampleKeys, recordPartner, recordRecheck, type Store } from '../store/index.js';
 import { deserializeError } from './serialize-error.js';
 import type { WorkerPool } from './worker-pool.js';
 import type { ConfirmTask } from './worker-task.js';
@@ -10,8 +10,10 @@ export interface RecheckOutcome {
   readonly checked: number;
   readonly stillFail: number;
   readonly nowHold: number;
-  /** Counterexamples left unchecked because the run was stopped first (they are re-checked next time). */
+  /** Counterexamples (or partners to derive) left because the run was stopped first (done next time). */
   readonly pending: number;
+  /** Failing partners of an older store's counterexamples derived and stored by this re-check (migration 7). */
+  readonly partnersStored: number;
 }
 
 // Indices per worker task: small enough that a stop is noticed quickly.
@@ -31,26 +33,29 @@ export async function recheckCounterexamples(
   stopped: () => boolean,
 ): Promise<RecheckOutcome> {
   const keys = new Set(classes.map((c) => c.key));
-  const batches: { classKey: string; indices: bigint[] }[] = [];
-  const open = new Map<string, bigint[]>();
+  const batches: { classKey: string; indices: bigint[]; partnersOf: bigint[] }[] = [];
+  const open = new Map<string, { classKey: string; indices: bigint[]; partnersOf: bigint[] }>();
   for (const c of counterexampleKeys(db, base.fingerprint)) {
-    if (!keys.has(c.classKey) || c.recheck !== null) continue;
-    let list = open.get(c.classKey);
-    if (!list || list.length >= BATCH) {
-      list = [];
-      open.set(c.classKey, list);
-      batches.push({ classKey: c.classKey, indices: list });
+    if (!keys.has(c.classKey) || (c.recheck !== null && !c.partnerPending)) continue;
+    let batch = open.get(c.classKey);
+    if (!batch || batch.indices.length + batch.partnersOf.length >= BATCH) {
+      batch = { classKey: c.classKey, indices: [], partnersOf: [] };
+      open.set(c.classKey, batch);
+      batches.push(batch);
     }
-    list.push(c.index);
+    if (c.recheck === null) batch.indices.push(c.index);
+    if (c.partnerPending) batch.partnersOf.push(c.index);
   }
   let checked = 0;
   let stillFail = 0;
+  let partnersStored = 0;
+  let partnersDerived = 0;
   let next = 0;
   const lane = async () => {
     while (next < batches.length && !stopped()) {
-      const { classKey, indices } = batches[next++]!;
+      const { classKey, indices, partnersOf } = batches[next++]!;
       const what = `re-check of class ${classKey}`;
-      const reply = await pool.run({ ...base, kind: 'confirm', classKey, indices, attempt: 0 }, what);
+      const reply = await pool.run({ ...base, kind: 'confirm', classKey, indices, partnersOf, attempt: 0 }, what);
       if (!reply.ok) throw deserializeError(reply.error, what);
       if (!('confirmed' in reply)) throw new CodedError('internal_error', { what: 'Re-check', expected: 'confirmed results', received: `another reply (${what})` });
       db.transaction(() => {
@@ -59,10 +64,15 @@ export async function recheckCounterexamples(
           checked++;
           if (r.status === 'fails') stillFail++;
         }
+        for (const p of reply.partners ?? []) {
+          recordPartner(db, base.fingerprint, classKey, p.of, runId, p.row);
+          partnersDerived++;
+          if (p.row) partnersStored++;
+        }
       })();
     }
   };
   await Promise.all(Array.from({ length: Math.max(1, pool.size * 2) }, lane));
-  const total = batches.reduce((a, b) => a + b.indices.length, 0);
-  return { checked, stillFail, nowHold: checked - stillFail, pending: total - checked };
+  const total = batches.reduce((a, b) => a + b.indices.length + b.partnersOf.length, 0);
+  return { checked, stillFail, nowHold: checked - stillFail, pending: total - checked - partnersDerived, partnersStored };
 }

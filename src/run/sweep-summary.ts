@@ -57,7 +57,7 @@ export interface ClaimSummary {
   readonly newCounterexamples: number;
   /** Confirmed counterexamples in the store for this claim after the run (old and new). */
   readonly counterexamples: number;
-  readonly rechecked: { readonly checked: number; readonly stillFail: number; readonly nowHold: number; readonly pending: number };
+  readonly rechecked: { readonly checked: number; readonly stillFail: number; readonly nowHold: number; readonly pending: number; readonly partnersStored: number };
   /** `modular` when any comparison of this run used modular evaluation. */
   readonly method: SweepMethod;
   /** Union bound on a false "holds" over this run's modular comparisons. */

@@ -4,11 +4,11 @@ import { threadId } from 'node:worker_threads';
 import type { SizeClass } from '../claims/claim-api.js';
 import { claimCompileCounts } from '../claims/compile-counts.js';
 import { CodedError } from '../errors/index.js';
-import { evaluateChunk } from './evaluate-chunk.js';
+import { counterexampleRecord, evaluateChunk } from './evaluate-chunk.js';
 import * as claimRuntime from './claim-runtime.js';
 import { importClaimRuntime, type ClaimRuntime, type ClaimRuntimeModule } from './claim-runtime-module.js';
 import { serializeError } from './serialize-error.js';
-import type { ChunkResult, ChunkTask, ConfirmTask, WorkerReply, WorkerTask } from './worker-task.js';
+import type { ChunkResult, ChunkTask, ConfirmTask, DerivedPartner, WorkerReply, WorkerTask } from './worker-task.js';
 
 interface Loaded {
   readonly runtime: ClaimRuntime;
@@ -57,11 +57,20 @@ function sweepChunk(l: Loaded, task: ChunkTask): ChunkResult {
 
 function confirmAll(l: Loaded, task: ConfirmTask): WorkerReply {
   const cls = sizeClass(l, task.classKey);
+  const { plan, evaluator } = l.runtime;
   const confirmed = task.indices.map((index) => {
-    const r = l.runtime.evaluator.confirm(l.runtime.plan.instanceAt(cls, index));
+    const r = evaluator.confirm(plan.instanceAt(cls, index));
     return { index, status: r.status === 'fails' ? ('fails' as const) : ('holds' as const), left: r.left, right: r.right };
   });
-  return { ok: true, confirmed };
+  // The pair's evaluation names T(b) (for a representative and for a paired boundary alike); T(b) = b or
+  // outside the class, or a transform that is not paired, has no partner to derive.
+  const partners = (task.partnersOf ?? []).map((of): DerivedPartner => {
+    const p = evaluator.evaluate(plan.instanceAt(cls, of)).partnerIndex;
+    if (p === undefined || p === of) return { of, row: undefined };
+    const c = evaluator.confirm(plan.instanceAt(cls, p));
+    return { of, row: c.status === 'fails' ? counterexampleRecord(cls, c) : undefined };
+  });
+  return { ok: true, confirmed, partners };
 }
 
 // Test hook: PUZZLESWEEP_TEST_COMPILE_COUNTS=<folder> writes this thread's claim parse and compile counts

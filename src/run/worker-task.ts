@@ -1,5 +1,5 @@
 import type { Measured, SharedTables } from '../claims/claim-api.js';
-import type { ChunkFindings } from '../store/index.js';
+import type { ChunkFindings, CounterexampleRecord } from '../store/index.js';
 import type { ErrorParts } from '../errors/index.js';
 
 interface TaskBase {
@@ -30,6 +30,14 @@ export interface ChunkTask extends TaskBase {
 export interface ConfirmTask extends TaskBase {
   readonly kind: 'confirm';
   readonly indices: readonly bigint[];
+  /** Of these, the ones whose failing partner T(b) an older store did not keep: derive and confirm it too. */
+  readonly partnersOf?: readonly bigint[] | undefined;
+}
+
+/** The partner T(b) of a re-checked counterexample b: its confirmed row when it fails, else undefined. */
+export interface DerivedPartner {
+  readonly of: bigint;
+  readonly row: CounterexampleRecord | undefined;
 }
 
 export type WorkerTask = ChunkTask | ConfirmTask;
@@ -54,5 +62,9 @@ export interface SerializedError {
 
 export type WorkerReply =
   | { readonly ok: true; readonly chunk: ChunkResult }
-  | { readonly ok: true; readonly confirmed: readonly { readonly index: bigint; readonly status: 'fails' | 'holds'; readonly left: Measured; readonly right: Measured }[] }
+  | {
+      readonly ok: true;
+      readonly confirmed: readonly { readonly index: bigint; readonly status: 'fails' | 'holds'; readonly left: Measured; readonly right: Measured }[];
+      readonly partners?: readonly DerivedPartner[] | undefined;
+    }
   | { readonly ok: false; readonly error: SerializedError };

@@ -108,9 +108,41 @@ export function recordRecheck(db: Store, fingerprint: string, classKey: string, 
 }
 
 /** Where each stored counterexample of a claim is and its re-check outcome, without reading its values. */
-export function counterexampleKeys(db: Store, fingerprint: string): { classKey: string; index: bigint; recheck: 'fails' | 'holds' | null }[] {
-  const rows = db.prepare('SELECT class_key, instance_index, recheck FROM counterexamples WHERE fingerprint = ?').safeIntegers(true).all(fingerprint) as Record<string, unknown>[];
-  return rows.map((r) => ({ classKey: r.class_key as string, index: r.instance_index as bigint, recheck: (r.recheck as 'fails' | 'holds' | null) ?? null }));
+export function counterexampleKeys(
+  db: Store,
+  fingerprint: string,
+): { classKey: string; index: bigint; recheck: 'fails' | 'holds' | null; partnerPending: boolean }[] {
+  const rows = db
+    .prepare('SELECT class_key, instance_index, recheck, partner_pending FROM counterexamples WHERE fingerprint = ?')
+    .safeIntegers(true)
+    .all(fingerprint) as Record<string, unknown>[];
+  return rows.map((r) => ({
+    classKey: r.class_key as string,
+    index: r.instance_index as bigint,
+    recheck: (r.recheck as 'fails' | 'holds' | null) ?? null,
+    partnerPending: Number(r.partner_pending) === 1,
+  }));
+}
+
+/** Stored counterexamples of a claim whose failing partner an older store did not keep (see migration 7). */
+export function pendingPartnerCount(db: Store, fingerprint: string): number {
+  return (db.prepare('SELECT COUNT(*) AS n FROM counterexamples WHERE fingerprint = ? AND partner_pending = 1').get(fingerprint) as { n: number }).n;
+}
+
+/**
+ * Records what re-deriving the partner of an older store's counterexample found: a failing partner gets its
+ * row, and (only if the row is new) leaves the holds of the pre-partner chunk that counted it as holding.
+ */
+export function recordPartner(db: Store, fingerprint: string, classKey: string, of: bigint, runId: number, partner: CounterexampleRecord | undefined): void {
+  if (partner && insertCounterexample(db, fingerprint, runId, { ...partner, partnerOf: of })) {
+    db.prepare(
+      `UPDATE chunks SET holds = holds - 1
+        WHERE chunk_id = (SELECT chunk_id FROM chunks
+                           WHERE fingerprint = ? AND class_key = ? AND state = 'done' AND nonzero IS NULL AND holds > 0
+                             AND start_index <= ? AND end_index > ? LIMIT 1)`,
+    ).run(fingerprint, classKey, partner.index, partner.index);
+  }
+  db.prepare('UPDATE counterexamples SET partner_pending = 0 WHERE fingerprint = ? AND class_key = ? AND instance_index = ?').run(fingerprint, classKey, of);
 }
 
 /** A class holds a stored counterexample that was not overturned by a re-check. */

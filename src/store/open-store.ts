@@ -18,6 +18,13 @@ function schemaVersion(db: Store): number {
   return row.v ?? 0;
 }
 
+// The schema version without writing anything (0 when the version table does not exist yet).
+function readVersion(db: Store): number {
+  const table = db.prepare(`SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'schema_version'`).get();
+  if (!table) return 0;
+  return (db.prepare('SELECT MAX(version) AS v FROM schema_version').get() as { v: number | null }).v ?? 0;
+}
+
 function migrate(db: Store): void {
   // IMMEDIATE takes the write lock first, so two processes opening a new store do not both migrate.
   db.transaction(() => {
@@ -42,8 +49,11 @@ function checkOwnership(db: Store, path: string): void {
   if (tables.length > 0 && !tables.some((t) => OWN_TABLES.has(t))) throw foreignStore(path, tables);
 }
 
-/** Opens (creating folder and file if needed) and migrates a store; `readonly` never creates anything. */
-export function openStore(path: string, options: { readonly?: boolean } = {}): Store {
+/**
+ * Opens (creating folder and file if needed) and migrates a store; `readonly` never creates anything, and
+ * with `upgrade` brings an older store's schema up to date first (the migrations keep every row).
+ */
+export function openStore(path: string, options: { readonly?: boolean; upgrade?: boolean } = {}): Store {
   let db: Store | undefined;
   try {
     if (!options.readonly) mkdirSync(dirname(path), { recursive: true });
@@ -57,6 +67,12 @@ export function openStore(path: string, options: { readonly?: boolean } = {}): S
       db.pragma('synchronous = NORMAL');
       registerStoreFunctions(db);
       migrate(db);
+    } else if (options.upgrade && readVersion(db) < STORE_MIGRATIONS.length) {
+      // A reader of an older store sees today's tables: the store is brought up to date once (the
+      // migrations keep every row), then read as asked; a store that cannot be written says so.
+      db.close();
+      openStore(path).close();
+      return openStore(path, { readonly: true });
     }
     return db;
   } catch (e) {

@@ -166,4 +166,15 @@ export const STORE_MIGRATIONS: readonly string[] = [
   `
   ALTER TABLE claims ADD COLUMN source_json TEXT;
   `,
+  // 7 (issue 7): a counterexample found before partners were stored (migration 5 counted its failing partner
+  // T(b) among the holds of a chunk of that time) waits for the next run to derive the partner: the re-check
+  // confirms T(b) exactly, stores its row and takes it out of that chunk's holds.
+  `
+  ALTER TABLE counterexamples ADD COLUMN partner_pending INTEGER NOT NULL DEFAULT 0;
+  UPDATE counterexamples SET partner_pending = 1
+   WHERE partner_of IS NULL
+     AND EXISTS (SELECT 1 FROM chunks k
+                  WHERE k.fingerprint = counterexamples.fingerprint AND k.class_key = counterexamples.class_key
+                    AND k.state = 'done' AND k.nonzero IS NULL AND k.paired > 0);
+  `,
 ];

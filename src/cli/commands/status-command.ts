@@ -7,6 +7,7 @@ import {
   findClaims,
   freeRun,
   listCounterexamples,
+  pendingPartnerCount,
   listLeaseHolders,
   listRuns,
   listVerified,
@@ -70,6 +71,8 @@ async function claimStatus(db: Store, c: ClaimRecord, dbArg: string) {
       free: h.gone !== undefined ? freeHint(h.runId) : null,
     })),
     counterexamples: counterexamples.length,
+    // Counterexamples of an older store whose failing partner T(b) is not yet stored (the next run derives it).
+    partnersPending: pendingPartnerCount(db, c.fingerprint),
     // Boundaries over every run: holding (of which with a nonzero value; null when an older store did not count it), failing.
     tallies: totalsOf(classTallies(db, c.fingerprint)),
     smallestCounterexample: counterexamples[0] ? { classKey: counterexamples[0].classKey, index: counterexamples[0].index.toString(), size: counterexamples[0].size } : null,
@@ -98,6 +101,11 @@ function statusText(s: Awaited<ReturnType<typeof claimStatus>>): string {
     lines.push(`  incomplete classes: ${s.incomplete.map((p) => `${p.classKey} (${p.done}${p.instances ? ` of ${p.instances}` : ''} done)`).join('; ')}; run the claim again to finish them`);
   }
   lines.push(`  counterexamples: ${s.counterexamples}${s.smallestCounterexample ? ` (smallest in class ${s.smallestCounterexample.classKey}, index ${s.smallestCounterexample.index})` : ''}`);
+  if (s.partnersPending) {
+    lines.push(
+      `  partners not yet stored: ${s.partnersPending} counterexample${s.partnersPending === 1 ? '' : 's'} of an older store may fail with their partner T(b), which that store counted as holding; run the claim again to derive them`,
+    );
+  }
   for (const l of s.leases) {
     lines.push(
       l.stuck

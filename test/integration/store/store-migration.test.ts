@@ -7,8 +7,9 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { loadSweepClaim } from '../../../src/run/load-sweep-claim.js';
 import { parseRunOptions } from '../../../src/run/run-options.js';
 import { runSweep } from '../../../src/run/run-sweep.js';
-import { openStore } from '../../../src/store/index.js';
+import { classTallies, listCounterexamples, openStore, pendingPartnerCount } from '../../../src/store/index.js';
 import { STORE_MIGRATIONS } from '../../../src/store/store-migrations.js';
+import { exchangeReverseFailures } from '../../support/exchange-reverse-brute-force.js';
 
 const fixture = fileURLToPath(new URL('../../fixtures/stores/schema-2/', import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-migrate-'));
@@ -66,5 +67,51 @@ describe('a store of schema version 2 (issue 7)', () => {
     expect(t.claims[0]!.instancesChecked).toBe(0);
     expect(s.claims[0]!.classes.map((c) => c.state)).toEqual(['verified', 'verified', 'verified', 'verified']);
     expect(s.exitCode).toBe(0);
+  });
+
+  it('derives the failing partners the older store counted as holding, so its figures agree with a brute force', async () => {
+    const { path } = oldStore('partners.sqlite');
+    const claim = loadSweepClaim(join(fixture, 'fx-exchange-reverse.json'));
+    const before = openStore(path);
+    const pending = pendingPartnerCount(before, claim.fingerprint);
+    const rowsBefore = listCounterexamples(before, claim.fingerprint).length;
+    before.close();
+    // The dump stored one row per failing pair {b, T(b)} (fixture README: written before partners were kept).
+    expect(pending).toBe(rowsBefore);
+    const s = await runSweep({ claims: [claim], options: parseRunOptions({ db: path, workers: 1 }) });
+    expect(s.claims[0]!.instancesChecked).toBe(0);
+    const db = openStore(path);
+    try {
+      expect(s.claims[0]!.rechecked.partnersStored).toBe(listCounterexamples(db, claim.fingerprint).length - rowsBefore);
+      expect(pendingPartnerCount(db, claim.fingerprint)).toBe(0);
+      const stored = listCounterexamples(db, claim.fingerprint);
+      const tallies = classTallies(db, claim.fingerprint);
+      // The fixture claim's classes: a ≤ 3, b ≤ 2 (fx-exchange-reverse.json).
+      for (let a = 1; a <= 3; a++) {
+        for (let b = 1; b <= 2; b++) {
+          // Independent brute force: naive backtracking counts, the steps written out by hand.
+          const brute = exchangeReverseFailures(a, b);
+          const key = `a=${a},b=${b}`;
+          const here = stored.filter((x) => x.classKey === key).map((x) => [x.left.sides[0], x.left.sides[1], x.left.sides[3], x.left.sides[4]].join('|'));
+          expect(here.sort(), key).toEqual([...brute.failing].sort());
+          const t = tallies.get(key)!;
+          expect(t.fails, key).toBe(brute.failing.length);
+          expect(t.holds, key).toBe(brute.instances - brute.failing.length);
+        }
+      }
+    } finally {
+      db.close();
+    }
+  });
+
+  it('a reader (status, report, counterexamples open stores read-only) sees an older store through today\'s schema', () => {
+    const { path, counts } = oldStore('reader.sqlite');
+    const db = openStore(path, { readonly: true, upgrade: true });
+    try {
+      expect((db.prepare('SELECT MAX(version) AS v FROM schema_version').get() as { v: number }).v).toBe(STORE_MIGRATIONS.length);
+      expect((db.prepare('SELECT COUNT(*) AS n FROM counterexamples').get() as { n: number }).n).toBe(counts.counterexamples);
+    } finally {
+      db.close();
+    }
   });
 });

@@ -20,7 +20,7 @@ const claim: ClaimSummary = {
   overturned: 0,
   newCounterexamples: 4,
   counterexamples: 4,
-  rechecked: { checked: 0, stillFail: 0, nowHold: 0, pending: 0 },
+  rechecked: { checked: 0, stillFail: 0, nowHold: 0, pending: 0, partnersStored: 0 },
   method: 'exact',
   errorBound: 0,
   outcome: 'counterexample',

@@ -20,7 +20,7 @@ const claim: ClaimSummary = {
   overturned: 0,
   newCounterexamples: 1,
   counterexamples: 1,
-  rechecked: { checked: 0, stillFail: 0, nowHold: 0, pending: 0 },
+  rechecked: { checked: 0, stillFail: 0, nowHold: 0, pending: 0, partnersStored: 0 },
   method: 'exact',
   errorBound: 0,
   classes: [{ key: 'n=2', size: 6, lengths: [2, 0, 2, 0, 2, 0], instances: '64', done: '64', checked: 12, holds: 9, fails: 1, state: 'counterexample' }],
