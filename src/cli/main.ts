@@ -51,10 +51,21 @@ function checkCommandLine(): void {
   if (e) refuse(e);
 }
 
+// yargs looks for package.json above its own module, which in the bundle is dist/cli/ (it then falls back to
+// the working directory); the version is read from this package's own file (dist/cli/ or src/cli/ → root).
+function packageVersion(): string {
+  try {
+    return (JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
+  } catch {
+    return 'unknown';
+  }
+}
+
 async function parse(): Promise<void> {
   if ((invoked === undefined || !names.includes(invoked)) && !asksHelp) checkCommandLine();
   const { default: yargs } = await import('yargs');
-  const cli = yargs(argv).scriptName('puzzlesweep');
+  // English whatever LANG says, like every message of ours (and the bundle carries no yargs locale files).
+  const cli = yargs(argv).scriptName('puzzlesweep').locale('en');
   // yargs renders the invoked command's whole help after starting its handler, only to show it should the
   // handler fail; our .fail never shows help, and that rendering (string widths of every line) cost 25–60 ms
   // of every run. yargs is pinned; test/e2e/cli-startup.test.ts checks that help and errors still print.
@@ -95,6 +106,7 @@ async function parse(): Promise<void> {
       // yargs refused something our check let through: its own words become the `received` part.
       refuse(commandLineError(argv, names, invoked, spec) ?? new CodedError('invalid_command_line', { what: 'Command line', expected: "arguments the command takes (see 'puzzlesweep --help')", received: msg }));
     })
+    .version(packageVersion())
     .help()
     .parseAsync();
 }

@@ -1,7 +1,10 @@
-import { readFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, symlinkSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { COMMANDS } from '../../src/cli/command-registry.js';
-import { cli } from './cli-process.js';
+import { CLI, cli } from './cli-process.js';
 
 // The start-up work (issue 8): dist/cli/main.js is an esbuild bundle (scripts/bundle-cli.mjs), `--help` prints
 // the copy yargs rendered at build time, and yargs no longer renders a command's help before running it.
@@ -13,6 +16,8 @@ describe('CLI start-up shortcuts keep the output', () => {
     expect(rendered.status).toBe(0);
     expect(fast.stdout).toBe(rendered.stdout);
     expect(fast.stderr).toBe('');
+    // yargs would translate its own words under another locale; the CLI is English throughout, so the copy holds there too.
+    expect(cli(['--help'], { PUZZLESWEEP_RENDER_HELP: '1', LANG: 'de_DE.UTF-8', LC_ALL: 'de_DE.UTF-8' }).stdout).toBe(fast.stdout);
     // Every registered command is listed (its name at the start of a help line), with --help and --version.
     for (const c of COMMANDS) expect(rendered.stdout).toMatch(new RegExp(`^ +puzzlesweep ${c.command.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} `, 'm'));
     expect(rendered.stdout).toMatch(/^ +--help /m);
@@ -21,7 +26,10 @@ describe('CLI start-up shortcuts keep the output', () => {
 
   it("prints the package's version for --version (package.json)", () => {
     const version = (JSON.parse(readFileSync('package.json', 'utf8')) as { version: string }).version;
-    const r = cli(['--version']);
+    // From another working directory, through a symbolic link (as npm installs the bin), not only from the repo root.
+    const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-version-'));
+    symlinkSync(resolve(CLI), join(dir, 'puzzlesweep'));
+    const r = spawnSync(process.execPath, [join(dir, 'puzzlesweep'), '--version'], { encoding: 'utf8', cwd: dir });
     expect(r.status).toBe(0);
     expect(r.stdout.trim()).toBe(version);
   });
