@@ -1,0 +1,254 @@
+import { countFamily, FAMILY_SIDE_ORDER, makeRegion, type SafeInt, type Semiring } from '../engine/index.js';
+import type { SizeClass } from './claim-api.js';
+import type { ClaimProgram } from './compile-claim-program.js';
+import { rankString, unrankString } from './multiset-rank.js';
+import type { Layout } from './plan-claim.js';
+import { TABLE_PARTS, type TableShape } from './shared-tables.js';
+import { applySideMap } from './side-map.js';
+
+// The value tables of the bulk scan (family-scan.ts), one content cell at a time.
+
+// One content combination of a class (a content per group): a product family with one candidate list per side.
+export interface Cell {
+  readonly ok: boolean;
+  readonly left: Float64Array;
+  readonly leftStride: Float64Array;
+  readonly right: Float64Array;
+  /** Per side j of T(b): stride of its digit in `right`. */
+  readonly rightStride: Float64Array;
+  /** Per side j of T(b): source digit (of side `from_j` of b) → digit in `right`. */
+  readonly rankMap: Int32Array[];
+  /** T(b) is an instance of the class: its index is partnerBase + Σ partnerCoef[j] · digit_j. */
+  readonly inClass: boolean;
+  readonly partnerBase: number;
+  readonly partnerCoef: Float64Array;
+  readonly entries: number;
+  /** Sums over the last group's sides, per content of that group (`innerSums`). */
+  readonly inner: Map<number, InnerSums>;
+}
+
+export interface InnerSums {
+  readonly own: Float64Array;
+  readonly at: Float64Array;
+  readonly partner: Float64Array;
+}
+
+export const NOT_TABULATED: Cell = { ok: false, left: new Float64Array(0), leftStride: new Float64Array(6), right: new Float64Array(0), rightStride: new Float64Array(6), rankMap: [], inClass: false, partnerBase: 0, partnerCoef: new Float64Array(6), entries: 0, inner: new Map() };
+
+// A cell larger than this is left to the per-instance path.
+const MAX_CELL = 1 << 24;
+
+// Views of one run's shared tables in this worker.
+export interface SharedView {
+  readonly values: Float64Array;
+  readonly state: Int32Array;
+  readonly shape: TableShape;
+}
+
+// Waiting for a part another worker computes; past this, compute it here (that worker may have died).
+const PART_PATIENCE_MS = 10_000;
+// Entries per part of a shared table, at least.
+const PART_ENTRIES = 40_000;
+
+/** A cell's left table: its values by table index and the stride of each side's digit. */
+export interface LeftTable {
+  readonly values: Float64Array;
+  readonly stride: Float64Array;
+}
+
+/** Builders of a claim's cells: left tables (private or in shared memory) and the cell that compares b with T(b). */
+export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, sameTheory: boolean) {
+  const alphabet = program.left.boundaryLabels;
+  const sideMap = program.sideMap!;
+
+  // Whatever the tables cannot do (values past safe integers, a label the right theory lacks), the per-instance path does, with its own errors.
+  function guarded<T>(f: () => T | undefined): T | undefined {
+    try {
+      return f();
+    } catch {
+      return undefined;
+    }
+  }
+
+  function candidatesOf(layout: Layout, contents: readonly number[]): string[][] {
+    const candidates: string[][] = [[], [], [], [], [], []];
+    layout.groups.forEach((g, gi) => {
+      const list: string[] = [];
+      for (const content of g.sides.length === 1 ? g.contents : [g.contents[contents[gi]!]!]) {
+        for (let r = 0n; r < content.strings; r++) list.push(unrankString(r, content.counts).map((a) => alphabet[a]!).join(''));
+      }
+      for (const s of g.sides) candidates[s] = list;
+    });
+    return candidates;
+  }
+
+  function leftTable(cls: SizeClass, layout: Layout, contents: readonly number[]): LeftTable | undefined {
+    return guarded(() => {
+      const candidates = candidatesOf(layout, contents);
+      if (candidates.reduce((p, l) => p * l.length, 1) > MAX_CELL) return undefined;
+      const values = countFamily(makeRegion(cls.lengths), candidates, program.left, { semiring }).numbers;
+      return values ? { values, stride: strides(candidates.map((l) => l.length)) } : undefined;
+    });
+  }
+
+  // A cell's left table in shared memory: its parts (slices of the most significant side with several
+  // candidates) are claimed one by one, so workers needing the same cell split its work; then wait for the rest.
+  function sharedLeftTable(cls: SizeClass, layout: Layout, contents: readonly number[], view: SharedView, key: number): LeftTable | undefined {
+    const candidates = candidatesOf(layout, contents);
+    const counts = candidates.map((l) => l.length);
+    const size = view.shape.sizes[key]!;
+    if (counts.reduce((p, n) => p * n, 1) !== size) return undefined;
+    const values = view.values.subarray(view.shape.offsets[key]!, view.shape.offsets[key]! + size);
+    // Cut along a side the top-down sweep reads first (sides 2 and 3 start at the top), so that the parts
+    // share no steps; a part of the table is then a strided set of blocks.
+    const split = [1, 2, 0, 3, 5].find((k) => counts[k]! > 1) ?? 1;
+    const n = counts[split]!;
+    // Enough parts for the workers to share a large cell, few enough that each costs far more than its set-up.
+    const parts = Math.max(1, Math.min(TABLE_PARTS, n, Math.floor(size / PART_ENTRIES)));
+    const per = Math.ceil(n / parts);
+    const at = FAMILY_SIDE_ORDER.indexOf(split as 0 | 1 | 2 | 3 | 4 | 5);
+    const outer = FAMILY_SIDE_ORDER.slice(0, at).reduce((q: number, k) => q * counts[k]!, 1);
+    const inner = FAMILY_SIDE_ORDER.slice(at + 1).reduce((q: number, k) => q * counts[k]!, 1);
+    const region = makeRegion(cls.lengths);
+    const compute = (p: number) =>
+      guarded(() => {
+        const lo = p * per;
+        const hi = Math.min(n, lo + per);
+        if (hi <= lo) return true;
+        const sub = candidates.slice();
+        sub[split] = candidates[split]!.slice(lo, hi);
+        const t = countFamily(region, sub, program.left, { semiring }).numbers;
+        if (!t) return undefined;
+        const block = (hi - lo) * inner;
+        for (let o = 0; o < outer; o++) values.set(t.subarray(o * block, o * block + block), (o * n + lo) * inner);
+        return true;
+      }) === true;
+    const base = key * TABLE_PARTS;
+    for (let p = 0; p < parts; p++) {
+      if (Atomics.compareExchange(view.state, base + p, 0, 1) !== 0) continue;
+      Atomics.store(view.state, base + p, compute(p) ? 2 : 3);
+      Atomics.notify(view.state, base + p);
+    }
+    for (let p = 0; p < parts; p++) {
+      const began = Date.now();
+      while (Atomics.load(view.state, base + p) === 1) {
+        if (Date.now() - began > PART_PATIENCE_MS) {
+          // Its worker is gone or stuck: the values are the same whoever writes them.
+          Atomics.store(view.state, base + p, compute(p) ? 2 : 3);
+          Atomics.notify(view.state, base + p);
+          break;
+        }
+        Atomics.wait(view.state, base + p, 1, 50);
+      }
+      if (Atomics.load(view.state, base + p) !== 2) return undefined;
+    }
+    return { values, stride: strides(counts) };
+  }
+
+  function buildCell(cls: SizeClass, layout: Layout, contents: readonly number[], leftOf: (c: readonly number[]) => LeftTable | undefined): Cell {
+    const own = leftOf(contents);
+    if (!own) return NOT_TABULATED;
+    return guarded(() => tabulate(cls, layout, contents, own, leftOf)) ?? NOT_TABULATED;
+  }
+
+  function tabulate(
+    cls: SizeClass,
+    layout: Layout,
+    contents: readonly number[],
+    own: LeftTable,
+    leftOf: (c: readonly number[]) => LeftTable | undefined,
+  ): Cell | undefined {
+    const candidates = candidatesOf(layout, contents);
+    const leftStride = own.stride;
+    // T(b) side j is side from_j of b, reversed and renamed: map each candidate once.
+    const images = sideMap.map((s) => candidates[s.from]!.map((x) => applySideMap([{ ...s, from: 0 }], [cls.lengths[s.from]!], [x]).sides[0]!));
+    const lengths = sideMap.map((s) => cls.lengths[s.from]!);
+    const target = targetCell(layout, lengths, cls.lengths, images);
+    const partnerCoef = new Float64Array(6);
+    let partnerBase = 0;
+    if (target) {
+      let weight = 1;
+      for (let g = layout.groups.length - 1; g >= 0; g--) {
+        const group = layout.groups[g]!;
+        if (group.sides.length === 1) {
+          // the digit of a one-side group already holds its content's offset
+          partnerCoef[group.sides[0]!] = weight;
+          weight *= Number(group.size);
+          continue;
+        }
+        const content = group.contents[target.contents[g]!]!;
+        partnerBase += Number(content.offset) * weight;
+        let w = weight;
+        for (let k = group.sides.length - 1; k >= 0; k--) {
+          partnerCoef[group.sides[k]!] = w;
+          w *= Number(content.strings);
+        }
+        weight *= Number(group.size);
+      }
+    }
+    if (target && sameTheory) {
+      // T(b) lies in this class: its values are a cell of the same left tables.
+      const other = leftOf(target.contents);
+      if (!other) return undefined;
+      return { ok: true, left: own.values, leftStride, right: other.values, rightStride: other.stride, rankMap: target.rankMap, inClass: true, partnerBase, partnerCoef, entries: 0, inner: new Map() };
+    }
+    // Another theory or outside the class: a table of the images themselves, read by b's own digits (no pairing then).
+    const right = countFamily(makeRegion(lengths), images, program.right, { semiring }).numbers;
+    if (!right) return undefined;
+    const identity = images.map((list) => Int32Array.from(list, (_, d) => d));
+    return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length, inner: new Map() };
+  }
+
+  // The class cell T(b) falls in, with each side's source digit → rank there; undefined if T(b) is not in the class.
+  function targetCell(layout: Layout, lengths: readonly number[], classLengths: readonly number[], images: readonly string[][]): { contents: number[]; rankMap: Int32Array[] } | undefined {
+    if (lengths.some((l, i) => l !== classLengths[i])) return undefined;
+    const countsOf = (s: string) => {
+      const c = new Array<number>(alphabet.length).fill(0);
+      for (const ch of s) c[alphabet.indexOf(ch)]!++;
+      return c;
+    };
+    const contents: number[] = [];
+    const rankMap: Int32Array[] = [];
+    for (const g of layout.groups) {
+      const contentOf = (s: string) => {
+        const counts = countsOf(s);
+        return g.contents.findIndex((c) => c.counts.every((x, a) => x === counts[a]));
+      };
+      let shared = -1;
+      for (const side of g.sides) {
+        const list = images[side]!;
+        const ranks = new Int32Array(list.length);
+        for (let d = 0; d < list.length; d++) {
+          const s = list[d]!;
+          const c = contentOf(s);
+          if (c < 0) return undefined;
+          const content = g.contents[c]!;
+          const rank = Number(rankString([...s].map((ch) => alphabet.indexOf(ch)), content.counts));
+          if (g.sides.length === 1) ranks[d] = Number(content.offset) + rank;
+          else {
+            // the sides of a group share one content (the cell's)
+            if (shared >= 0 && c !== shared) return undefined;
+            shared = c;
+            ranks[d] = rank;
+          }
+        }
+        rankMap[side] = ranks;
+      }
+      contents.push(Math.max(shared, 0));
+    }
+    return { contents, rankMap };
+  }
+
+  return { leftTable, sharedLeftTable, buildCell };
+}
+
+// Strides of a family table's index (FAMILY_SIDE_ORDER: side 5 least significant), per side.
+function strides(counts: readonly number[]): Float64Array {
+  const out = new Float64Array(6);
+  let acc = 1;
+  for (const k of [...FAMILY_SIDE_ORDER].reverse()) {
+    out[k] = acc;
+    acc *= counts[k]!;
+  }
+  return out;
+}
