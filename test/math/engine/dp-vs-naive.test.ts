@@ -77,6 +77,9 @@ describe('DP = naive backtracking on every boundary with N ≤ 4', () => {
   it.each(['conjectures/pieces/quotient-weights-demo.json', 'conjectures/pieces/equivariant-k-theory-rhombi.json'])('formula weights: %s', (file) => {
     expect(compareFractions(file, 4)).toBe(28224);
   });
+  it('the built-in ssm pieces (quotient weights on composite rhombi), N ≤ 3', () => {
+    expect(compareFractions('ssm', 3)).toBe(2816);
+  });
   it('formula weights with negative powers of t, N ≤ 3', () => {
     expect(compareFractions('conjectures/pieces/laurent-weights-demo.json', 3)).toBe(2816);
   });
