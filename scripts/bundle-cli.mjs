@@ -60,6 +60,8 @@ const result = await build({
   external: ['better-sqlite3', 'piscina'],
   // CommonJS dependencies inside an ES module bundle call require() for Node's built-ins.
   banner: { js: "import { createRequire as __bundleRequire } from 'node:module'; const require = __bundleRequire(import.meta.url);" },
+  // main.ts prints help.txt only in this bundle (both come from the same build).
+  define: { PUZZLESWEEP_BUNDLE: 'true' },
   sourcemap: 'linked',
   metafile: true,
   logLevel: 'warning',

@@ -13,6 +13,9 @@ const argv = joinDashValues(process.argv.slice(2));
 const json = argv.includes('--json');
 const asksHelp = argv.includes('--help') || argv.includes('-h') || argv.includes('--version');
 
+/** Defined (true) only in the bundle that scripts/bundle-cli.mjs builds, together with help.txt. */
+declare const PUZZLESWEEP_BUNDLE: true | undefined;
+
 /** Set to render `--help` with yargs even when the build's copy of it exists (the build sets it to make that copy). */
 const RENDER_HELP_ENV = 'PUZZLESWEEP_RENDER_HELP';
 
@@ -21,6 +24,8 @@ const RENDER_HELP_ENV = 'PUZZLESWEEP_RENDER_HELP';
  * it applies: yargs wraps at min(80, terminal columns), so the copy serves only 80 columns or more.
  */
 function builtHelp(): string | undefined {
+  // Only the bundle uses the copy: a plain `tsc` build rewrites main.js but leaves an older help.txt behind.
+  if (typeof PUZZLESWEEP_BUNDLE === 'undefined') return undefined;
   if (argv.length !== 1 || argv[0] !== '--help' || process.env[RENDER_HELP_ENV]) return undefined;
   if ((process.stdout.columns ?? 80) < 80) return undefined;
   try {
