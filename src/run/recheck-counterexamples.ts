@@ -2,7 +2,7 @@ import type { SizeClass } from '../claims/claim-api.js';
 import { CodedError } from '../errors/index.js';
 import { counterexampleKeys, recordPartner, recordRecheck, type Store } from '../store/index.js';
 import { deserializeError } from './serialize-error.js';
-import type { WorkerPool } from './worker-pool.js';
+import type { TaskRunner } from './worker-pool.js';
 import type { ConfirmTask } from './worker-task.js';
 
 /** Result of re-checking a claim's stored counterexamples at the start of a run. */
@@ -26,7 +26,7 @@ const BATCH = 64;
  */
 export async function recheckCounterexamples(
   db: Store,
-  pool: WorkerPool,
+  pool: TaskRunner,
   base: Omit<ConfirmTask, 'kind' | 'classKey' | 'indices' | 'attempt'>,
   classes: readonly SizeClass[],
   runId: number,

@@ -1,4 +1,3 @@
-import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 import { CodedError } from '../errors/index.js';
 import { hasSchemaMessage, issueExpected, parseMarked, schemaMessageParts } from '../claims/zod-issue.js';
@@ -16,7 +15,8 @@ export const RunOptions = z.object({
     .array(maxEntry)
     .default([])
     .transform((entries) => Object.fromEntries(entries.map((e) => [e.slice(0, e.indexOf('=')), Number(e.slice(e.indexOf('=') + 1))])) as Record<string, number>),
-  workers: z.number().int().min(1).max(256).default(() => availableParallelism()),
+  /** `--workers`: worker threads; 0 sweeps in the main thread; absent: chosen by the family's size (run-sweep.ts). */
+  workers: z.number().int().min(0).max(256).optional(),
   db: z.string().min(1).default(DEFAULT_STORE_PATH),
   stopAtFirst: z.boolean().default(false),
   maxCounterexamples: z.number().int().min(1).optional(),

@@ -6,7 +6,9 @@ import { checkFamilyBounds, checkInstanceCount } from './family-size.js';
 import type { RunOptions } from './run-options.js';
 import { sweepClaim, type SweepProgress } from './sweep-claim.js';
 import type { ClaimSummary, SweepSummary } from './sweep-summary.js';
-import { WorkerPool } from './worker-pool.js';
+import { InProcessRunner } from './in-process-runner.js';
+import { WorkerPool, type TaskRunner } from './worker-pool.js';
+import { workerThreads } from './worker-threads.js';
 
 /** Exit status of `run --shard` when the shard stopped before its work was done (run it again to resume). */
 export const UNFINISHED_SHARD_EXIT = 4;
@@ -33,23 +35,34 @@ export function sweepExitCode(claims: readonly ClaimSummary[], interrupted: bool
 /** Sweeps each claim in turn on one worker pool and one store; returns data, prints nothing. */
 export async function runSweep(input: SweepInput): Promise<SweepSummary> {
   const began = Date.now();
-  const { options } = input;
+  // Worker threads asked for by number start at once: their start-up overlaps the planning and the store's opening.
+  let pool: TaskRunner | undefined = input.options.workers ? new WorkerPool(input.options.workers) : undefined;
+  try {
+    return await sweepAll(input, began, (threads) => (pool ??= threads === 0 ? new InProcessRunner() : new WorkerPool(threads)));
+  } finally {
+    await pool?.destroy();
+  }
+}
+
+async function sweepAll(input: SweepInput, began: number, runner: (threads: number) => TaskRunner): Promise<SweepSummary> {
+  const { options: given } = input;
   // Every claim is planned and its size checked before the store is opened: an absurd bound writes nothing.
   const plans: ClaimPlan[] = [];
   if (input.runtimeModule === undefined) {
     for (const claim of input.claims) {
       const program = claim.program ?? compileClaimProgram(JSON.parse(claim.canonicalJson) as unknown, claim.file);
-      checkFamilyBounds(program, options.max);
+      checkFamilyBounds(program, given.max);
       const plan = planClaim(program);
-      checkInstanceCount(plan, options.max);
+      checkInstanceCount(plan, given.max);
       plans.push(plan);
     }
   } else {
     const runtime = await importClaimRuntime(input.runtimeModule);
-    for (const claim of input.claims) plans.push(runtime.createClaimRuntime(claim.canonicalJson, { exact: options.exact }).plan);
+    for (const claim of input.claims) plans.push(runtime.createClaimRuntime(claim.canonicalJson, { exact: given.exact }).plan);
   }
+  const options = { ...given, workers: workerThreads(given.workers, plans, given.max) };
+  const pool = runner(options.workers);
   const db = openStore(options.db);
-  const pool = new WorkerPool(options.workers);
   const deadline = options.timeLimit !== undefined ? began + options.timeLimit * 1000 : undefined;
   const claims: ClaimSummary[] = [];
   let workerCrashes = 0;
@@ -71,7 +84,6 @@ export async function runSweep(input: SweepInput): Promise<SweepSummary> {
     }
   } finally {
     workerCrashes = pool.crashes;
-    await pool.destroy();
     db.close();
   }
   const interrupted = claims.some((c) => c.status === 'interrupted') || (input.signal?.aborted ?? false);

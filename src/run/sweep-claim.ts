@@ -26,7 +26,7 @@ import { deserializeError } from './serialize-error.js';
 import { settleClass } from './settle-class.js';
 import type { ClaimSummary } from './sweep-summary.js';
 import { createScheduler, type SweepScheduler } from './sweep-scheduler.js';
-import type { WorkerPool } from './worker-pool.js';
+import type { TaskRunner } from './worker-pool.js';
 import type { ChunkTask } from './worker-task.js';
 
 /** Progress of the claim being swept, for a progress bar. */
@@ -42,7 +42,7 @@ export interface SweepProgress {
 /** What a claim's sweep needs from the invocation around it. */
 export interface SweepContext {
   readonly db: Store;
-  readonly pool: WorkerPool;
+  readonly pool: TaskRunner;
   readonly options: RunOptions;
   readonly runtimeModule?: string | undefined;
   readonly signal?: AbortSignal | undefined;
@@ -91,10 +91,10 @@ export async function sweepClaim(ctx: SweepContext, claim: SweepClaim, plan: Cla
     const standing = counterexampleKeys(db, claim.fingerprint).filter((c) => c.recheck !== 'holds');
     const s = createScheduler({
       classes: parts.map((p) => ({ key: p.cls.key, count: p.limit, first: p.first })),
-      capacity: options.workers * 2,
+      capacity: ctx.pool.size * 2,
       stopAtFirst: options.stopAtFirst,
       maxCounterexamples: options.maxCounterexamples,
-      sizing: autoSizing(options.workers, options.chunkSize),
+      sizing: autoSizing(ctx.pool.size, options.chunkSize),
       failingClasses: new Set(standing.map((c) => c.classKey)),
       knownCounterexamples: standing.length,
     });

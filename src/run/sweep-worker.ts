@@ -1,6 +1,6 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { threadId } from 'node:worker_threads';
+import { isMainThread, threadId } from 'node:worker_threads';
 import type { SizeClass } from '../claims/claim-api.js';
 import { claimCompileCounts } from '../claims/compile-counts.js';
 import { CodedError } from '../errors/index.js';
@@ -45,7 +45,7 @@ function sizeClass(l: Loaded, key: string): SizeClass {
 // Test hook: PUZZLESWEEP_TEST_CRASH=<class key>:<start index>[@<attempts>] kills this worker thread on that chunk.
 function maybeCrash(task: ChunkTask): void {
   const spec = process.env.PUZZLESWEEP_TEST_CRASH;
-  if (!spec) return;
+  if (!spec || isMainThread) return;
   const [where, times] = spec.split('@') as [string, string | undefined];
   if (where === `${task.classKey}:${task.start}` && task.attempt < Number(times ?? 1)) process.exit(70);
 }

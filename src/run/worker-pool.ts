@@ -10,15 +10,25 @@ export const MAX_ATTEMPTS = 3;
 
 // The worker always runs compiled JavaScript: under vitest this module is a .ts source in src/, so point at dist/.
 // The build's one-file bundle of the worker (scripts/bundle-worker.mjs) starts faster than ~60 modules.
+// '../run/' resolves to dist/run/ both from this module (dist/run/) and from the CLI's bundle (dist/cli/).
 function workerEntryUrl(): string {
   const here = fileURLToPath(import.meta.url);
-  const dir = here.endsWith('.ts') ? here.replace(/[\\/]src[\\/]run[\\/][^\\/]+\.ts$/, '/dist/run') : dirname(here);
+  const dir = here.endsWith('.ts') ? here.replace(/[\\/]src[\\/]run[\\/][^\\/]+\.ts$/, '/dist/run') : join(dirname(here), '..', 'run');
   const bundle = join(dir, 'sweep-worker.bundle.js');
   return pathToFileURL(existsSync(bundle) ? bundle : join(dir, 'sweep-worker.js')).href;
 }
 
+/** Where a sweep's tasks run: worker threads (`WorkerPool`) or the main thread (`InProcessRunner`). */
+export interface TaskRunner {
+  /** Tasks that may run at once (the worker count; 1 on the main thread). */
+  readonly size: number;
+  crashes: number;
+  run(task: WorkerTask, what: string): Promise<WorkerReply>;
+  destroy(): Promise<void>;
+}
+
 /** A piscina pool that retries a task whose worker died, a bounded number of times. */
-export class WorkerPool {
+export class WorkerPool implements TaskRunner {
   private readonly pool: Piscina<WorkerTask, WorkerReply>;
   /** Crashes seen so far (each one retried or reported). */
   crashes = 0;

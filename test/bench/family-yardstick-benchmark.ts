@@ -66,9 +66,11 @@ export default async function familyYardstickBenchmark(): Promise<string> {
     const smallSpec: string[] = [];
     for (let a = 1; a <= 4; a++) for (let b = 1; b <= 3; b++) smallSpec.push(`${a},${b},0,${a},${b},0`);
     let n = 0;
-    const sweep = (file: string, workers: number, env: string[] = [], extra: string[] = []) => {
+    // workers 'auto': no --workers (a small family is then swept in the main thread).
+    const sweep = (file: string, workers: number | 'auto', env: string[] = [], extra: string[] = []) => {
       const db = join(dir, `store-${n++}.sqlite`);
-      const r = timed([...(env.length ? ['env', ...env] : []), 'node', cli, 'run', file, '--workers', String(workers), '--db', db, '--json', ...extra]);
+      const threads = workers === 'auto' ? [] : ['--workers', String(workers)];
+      const r = timed([...(env.length ? ['env', ...env] : []), 'node', cli, 'run', file, ...threads, '--db', db, '--json', ...extra]);
       const c = r.status === 0 ? (JSON.parse(r.out) as { claims: { instancesChecked: number; holds: number }[] }).claims[0]! : undefined;
       // Worker time inside chunks (the sweep's own work), as each chunk's row records it.
       const store = new Database(db, { readonly: true });
@@ -91,8 +93,9 @@ export default async function familyYardstickBenchmark(): Promise<string> {
     loads.push(loadavg()[0]!.toFixed(1));
     const sixPy = timed(['python3', python, 'family', 'cohomology', '6,6,0,6,6,0', '1', '4']);
     loads.push(loadavg()[0]!.toFixed(1));
-    const smallRuns: { 1: ReturnType<typeof sweep>[]; 2: ReturnType<typeof sweep>[] } = { 1: [], 2: [] };
-    for (let i = 0; i < 5; i++) for (const w of [1, 2] as const) smallRuns[w].push(sweep(small, w));
+    const smallRuns: { auto: ReturnType<typeof sweep>[]; 1: ReturnType<typeof sweep>[]; 2: ReturnType<typeof sweep>[] } = { auto: [], 1: [], 2: [] };
+    for (let i = 0; i < 5; i++) for (const w of ['auto', 1, 2] as const) smallRuns[w].push(sweep(small, w));
+    const smallMain = median(smallRuns.auto);
     const small1 = median(smallRuns[1]);
     const small2 = median(smallRuns[2]);
     const smallPlain = median([0, 1, 2].map(() => timed(['python3', python, 'plain', 'cohomology', smallSpec.join(';'), '1', '4'])));
@@ -121,7 +124,7 @@ export default async function familyYardstickBenchmark(): Promise<string> {
     const lines = [
       '## Family sweeps against the Python yardstick (test/bench/family-yardstick-benchmark.ts)',
       '',
-      `Whole processes under \`/usr/bin/time\`, same run; CPU = user + system of every thread; peak = maximum resident set. \`run\` sweeps into a fresh store (\`--json\`); runs of \`run\` are medians of ${reps} (6×6) or 5 (2,744), 1 and 2 workers alternating. Load average (1 min) at the start, after the 6×6 runs, after Python, after the 7×7 runs, after the 5×5 runs and at the end: ${loads.join(', ')} on 2 cores.`,
+      `Whole processes under \`/usr/bin/time\`, same run; CPU = user + system of every thread; peak = maximum resident set. \`run\` sweeps into a fresh store (\`--json\`); runs of \`run\` are medians of ${reps} (6×6) or 5 (2,744), 1 and 2 workers alternating (and, for 2,744, no \`--workers\`: the main thread). Load average (1 min) at the start, after the 6×6 runs, after Python, after the 7×7 runs, after the 5×5 runs and at the end: ${loads.join(', ')} on 2 cores.`,
       'Claim: "exchanging sides 1 and 4 keeps the cohomology value", sides 1, 4 and sides 2, 5 of equal content. Python: `python-dp.py family` (batched: one open-bottom DP per top part) and `python-dp.py plain` (one closed DP for b and one for T(b) per labeling).',
       '',
       '| case | labelings | holds | wall s | CPU s | peak MB |',
@@ -131,6 +134,7 @@ export default async function familyYardstickBenchmark(): Promise<string> {
       `| 6×6: \`run\`, 1 worker, per-instance path (\`PUZZLESWEEP_PER_INSTANCE=1\`, one run) | ${sixOne.checked} | ${sixOne.holds} | ${s(sixOne.wall)} | ${s(sixOne.cpu)} | ${sixOne.rssMB} |`,
       `| 6×6: engine tables alone (\`family-case.mjs\`, no store, no workers) | ${pyChecked(sixEngine)} | | ${s(sixEngine.wall)} | ${s(sixEngine.cpu)} | ${sixEngine.rssMB} |`,
       `| 6×6: Python, batched family loop | ${pyChecked(sixPy)} | | ${s(sixPy.wall)} | ${s(sixPy.cpu)} | ${sixPy.rssMB} |`,
+      `| 2,744: \`run\` without \`--workers\` (swept in the main thread) | ${smallMain.checked} | ${smallMain.holds} | ${s(smallMain.wall)} | ${s(smallMain.cpu)} | ${smallMain.rssMB} |`,
       `| 2,744: \`run\`, 1 worker | ${small1.checked} | ${small1.holds} | ${s(small1.wall)} | ${s(small1.cpu)} | ${small1.rssMB} |`,
       `| 2,744: \`run\`, 2 workers | ${small2.checked} | ${small2.holds} | ${s(small2.wall)} | ${s(small2.cpu)} | ${small2.rssMB} |`,
       `| 2,744: Python, plain loop | ${pyChecked(smallPlain)} | | ${s(smallPlain.wall)} | ${s(smallPlain.cpu)} | ${smallPlain.rssMB} |`,
@@ -147,13 +151,13 @@ export default async function familyYardstickBenchmark(): Promise<string> {
       `- The value tables against the per-instance path, same 6×6 sweep, 1 worker: ${ratio(sixOne.cpu, six1.cpu)} less CPU, ${ratio(sixOne.wall, six1.wall)} in wall time; the stores they write are identical (test/integration/run/bulk-store-identical.test.ts).`,
       `- 2 workers against 1 on the 6×6 sweep: ${ratio(six1.wall, six2.wall)} in wall time (goal ≥ 1.8×); CPU ${s(six1.cpu)} s against ${s(six2.cpu)} s. Wall times of the ${reps} runs, 1 worker: ${sixRuns[1].map((r) => s(r.wall)).join(', ')}; 2 workers: ${sixRuns[2].map((r) => s(r.wall)).join(', ')}.`,
       `- 2 workers against 1 on the 7×7 sweep (11.8 M labelings, where the sweep outweighs start-up): ${ratio(seven1.wall, seven2.wall)} in wall time; worker time inside chunks ${(seven1.chunkMs / 1000).toFixed(2)} s (1 worker) and ${(seven2.chunkMs / 1000).toFixed(2)} s (2 workers, summed over both).`,
-      `- 2,744, \`run\` (1 worker) against the plain Python loop: ${ratio(smallPlain.cpu, small1.cpu)} in CPU, ${ratio(smallPlain.wall, small1.wall)} in wall time (goal ≥ 3×, well under a second); against the batched loop ${ratio(smallBatched.cpu, small1.cpu)} in CPU.`,
-      `- Worker time inside chunks (the sweep proper, summed over the chunks' rows): 6×6 ${(six1.chunkMs / 1000).toFixed(2)} s in ${six1.chunks} chunks with 1 worker, ${(six2.chunkMs / 1000).toFixed(2)} s in ${six2.chunks} chunks with 2; 2,744 ${(small1.chunkMs / 1000).toFixed(2)} s in ${small1.chunks} chunks. The rest of a run's CPU is start-up and the store.`,
+      `- 2,744, \`run\` without \`--workers\` (the main thread) against the plain Python loop: ${ratio(smallPlain.cpu, smallMain.cpu)} in CPU, ${ratio(smallPlain.wall, smallMain.wall)} in wall time (goal ≥ 3×, well under a second); against the batched loop ${ratio(smallBatched.cpu, smallMain.cpu)} in CPU. With 1 worker: ${ratio(smallPlain.cpu, small1.cpu)} in CPU, ${ratio(smallPlain.wall, small1.wall)} in wall time. Main thread against 1 worker: ${s(smallMain.cpu)} s against ${s(small1.cpu)} s of CPU, ${s(smallMain.wall)} s against ${s(small1.wall)} s wall.`,
+      `- Worker time inside chunks (the sweep proper, summed over the chunks' rows): 6×6 ${(six1.chunkMs / 1000).toFixed(2)} s in ${six1.chunks} chunks with 1 worker, ${(six2.chunkMs / 1000).toFixed(2)} s in ${six2.chunks} chunks with 2; 2,744 ${(small1.chunkMs / 1000).toFixed(2)} s in ${small1.chunks} chunks with 1 worker, ${(smallMain.chunkMs / 1000).toFixed(2)} s in ${smallMain.chunks} chunks in the main thread. The rest of a run's CPU is start-up and the store.`,
       `- Where the 6×6 sweep's CPU goes: a bare Node process ${s(bare.cpu)} s; the engine's tables for the whole family with Node's start (\`family-case.mjs\`) ${s(sixEngine.cpu)} s; \`run\` adds the CLI, the claim's compilation, the store and a worker thread that loads the claims and engine modules itself: ${s(six1.cpu - sixEngine.cpu)} s more.`,
       '',
       '### What stands between each case and its goal',
       '',
-      `- 2,744 labelings: 3× the plain Python loop (${s(smallPlain.cpu)} s of CPU) means ${s(smallPlain.cpu / 3)} s for the whole \`run\` process. Its fixed costs alone exceed that: Node's start ${s(bare.cpu)} s, the CLI's start ${s(help.cpu - bare.cpu)} s more, the worker's modules ${s(workerLoad.cpu - bare.cpu)} s more (in a thread of its own, after a thread's bootstrap), the claim compiled on the main thread and again in the worker, the store opened, written and closed; the chunks themselves took ${(small1.chunkMs / 1000).toFixed(2)} s of worker time. The family is 12 classes of at most 1,050 labelings, so per-cell set-up (candidate lists, rank maps, one \`countFamily\` per cell) is most of the chunk time.`,
+      `- 2,744 labelings: 3× the plain Python loop (${s(smallPlain.cpu)} s of CPU) means ${s(smallPlain.cpu / 3)} s for the whole \`run\` process. Without \`--workers\` no worker thread starts (README, "Run options"), which saves a thread's bootstrap and the worker's modules (${s(workerLoad.cpu - bare.cpu)} s when imported in a bare process); the \`run\` command is in the CLI's bundle. What remains: Node's start ${s(bare.cpu)} s, the CLI's start ${s(help.cpu - bare.cpu)} s more, the run's modules, the claim's compilation, the store opened, written and closed, and the chunks (${(smallMain.chunkMs / 1000).toFixed(2)} s). The family is 12 classes of at most 1,050 labelings, so per-cell set-up (candidate lists, rank maps, one \`countFamily\` per cell, and the garbage collection of all that) is most of the chunk time.`,
       `- 6×6, 2 workers: the chunks are ${(six1.chunkMs / 1000).toFixed(2)} s of worker time in a ${s(six1.wall)} s run. Start-up is serial (the CLI, the claim, the store, then each worker's bootstrap), so even with two free cores the bound is ${s(six1.wall)} / (${s(six1.wall)} − ${(six1.chunkMs / 2000).toFixed(2)}) = ${(six1.wall / (six1.wall - six1.chunkMs / 2000)).toFixed(2)}×; 1.8× needs a sweep whose chunks dominate (the 7×7 row). Each cell of the value tables is computed once across workers (shared memory, parts claimed with Atomics); a worker waits only for a part the other is computing.`,
       `- 6×6, 1 worker: the engine's tables cost ${((sixEngine.cpu - bare.cpu) / 0.853776).toFixed(2)} µs of CPU per labeling (\`family-case.mjs\` minus Node's start): one trie walk per content cell with side 5 open, a few hundred live profiles per step at a few ns per transition; the comparisons by index arithmetic add about 0.1–0.2 µs per labeling (profiles of the worker thread: \`scan\` against \`forwardStep\`/\`walk\`).`,
       '- Loads near the values above (1-minute load average of 10 or more on 2 cores) stretch every wall time; the CPU columns and their ratios are the numbers to read.',

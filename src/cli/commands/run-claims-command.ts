@@ -75,7 +75,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
         ...(args.shard !== undefined ? { shard: args.shard } : {}),
       });
       const cores = availableParallelism();
-      if (options.workers > cores) {
+      if ((options.workers ?? 0) > cores) {
         process.stderr.write(`⚠ --workers ${options.workers} is above this machine's ${cores} cores: the extra threads share cores and slow each other down (the default is ${cores})\n`);
       }
       // Every claim is validated before the store is opened, so bad input never touches it.

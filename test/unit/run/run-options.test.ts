@@ -9,8 +9,13 @@ describe('run options and replay commands', () => {
 
   it('names the flag in coded errors', () => {
     expect(() => parseRunOptions({ max: ['a:3'] })).toThrow(expect.objectContaining({ code: 'invalid_argument', path: '--max' }));
-    expect(() => parseRunOptions({ workers: 0 })).toThrow(expect.objectContaining({ path: '--workers', message: expect.stringMatching(/^--workers: expected .*, received 0$/) }));
+    expect(() => parseRunOptions({ workers: -1 })).toThrow(expect.objectContaining({ path: '--workers', message: expect.stringMatching(/^--workers: expected .*, received -1$/) }));
     expect(() => parseRunOptions({ maxCounterexamples: 1.5 })).toThrow(expect.objectContaining({ path: '--max-counterexamples' }));
+  });
+
+  it('--workers 0 (the main thread) is accepted; absent leaves the choice to the run', () => {
+    expect(parseRunOptions({ workers: 0 }).workers).toBe(0);
+    expect(parseRunOptions({}).workers).toBeUndefined();
   });
 
   it('quotes replay arguments only when the shell needs it', () => {
