@@ -3,7 +3,7 @@ import { getHeapStatistics } from 'node:v8';
 import { generatingSemiring, type ProgressCallback } from '../../engine/index.js';
 import { countJson, valueText } from '../../report/value-json.js';
 import { countRegion, regionOfSides } from '../../claims/count-region.js';
-import { announceLargeRegion } from '../size-notice.js';
+import { slowCountNotice } from '../size-notice.js';
 import { parseBoundary, triangleEchoJson, triangleEchoLines } from '../boundary-args.js';
 import { classOptions, formOption } from '../class-options.js';
 import type { ValueForm } from '../../report/root-form.js';
@@ -80,13 +80,12 @@ export const countCommand: CommandModule<object, CountArgs> = {
       }
       const pieces = await loadTheory(args.theory);
       const { sides, triangle } = parseBoundary(args);
-      announceLargeRegion(regionOfSides(sides), `counting in ${pieces.name}`);
       // Half the heap: the engine stops with a coded error naming the limit instead of exhausting V8.
       const memoryLimitBytes = Math.floor(getHeapStatistics().heap_size_limit / 2);
       const result = countRegion(pieces, sides, {
         completed: args.completed,
         memoryLimitBytes,
-        ...(process.stderr.isTTY ? { onProgress: progressLine() } : {}),
+        onProgress: slowCountNotice(regionOfSides(sides), `counting in ${pieces.name}`, process.stderr.isTTY ? progressLine() : undefined),
         ...(args.statistic !== undefined ? { statistic: args.statistic } : {}),
       });
       if (process.stderr.isTTY) process.stderr.write('\r\x1b[K');
