@@ -10,12 +10,13 @@ import { enumeratePuzzles as enumerateEngine, structureConstantSides, type Piece
 import { CodedError } from './errors/index.js';
 import { expandProduct } from './products/expand-product.js';
 import { structureTable } from './products/parallel-table.js';
-import { parsePartition, partitionOfString, partitionText, stringOfPartition, type Grassmannian } from './products/partition-strings.js';
+import { parseGrassmannian, parsePartition, partitionOfString, partitionText, stringOfPartition, type Grassmannian } from './products/partition-strings.js';
 import { productJson, tableJson } from './products/table-formats.js';
 import type { ValueForm } from './report/root-form.js';
 import type { CountJson, ProductJson, TableJson } from './products/json-types.js';
 import { countJson, JSON_FORMAT_VERSION } from './report/value-json.js';
 import { loadSweepClaim } from './run/load-sweep-claim.js';
+import { isLocalizationOnly, localizationProduct, localizationTableRows } from './run/localization-values.js';
 import { parseRunOptions, type RunOptionsInput } from './run/run-options.js';
 import { runSweep } from './run/run-sweep.js';
 import type { SweepSummary } from './run/sweep-summary.js';
@@ -26,7 +27,7 @@ export { ERROR_CATALOGUE, errorJson, exitCodeFor, formatError, type ErrorCode, t
 export type { Claim, Grassmannian, PieceSet, Puzzle, SweepSummary, ValueForm };
 export type { CountJson, JsonInteger, PartitionsJson, ProductJson, TableJson, TermJson, ValueJson } from './products/json-types.js';
 
-/** A theory name (`cohomology`, `equivariant`, `k-theory`, `dual-k-theory`), a piece-set JSON path, or a piece set. */
+/** A theory name (`cohomology`, `equivariant`, `k-theory`, `dual-k-theory`, `ssm-nonequivariant`, `ssm`; for `expand` and `table` also `equivariant-k-theory`, `ssm-chern`), a piece-set JSON path, or a piece set. */
 export type TheoryInput = string | PieceSet;
 
 /** A Schubert class: a 0/1 string such as `0101001`, or a partition such as `[2, 1]` (then `grassmannian` is needed). */
@@ -66,13 +67,18 @@ export function expand(options: ClassesOptions & { readonly lambda: ClassInput; 
   const l = classString(options.lambda, g, 'lambda');
   const m = classString(options.mu, g, 'mu');
   const grassmannian = /^[01]*$/.test(l) ? { k: [...l].filter((c) => c === '1').length, n: l.length } : undefined;
-  return productJson(expandProduct(theoryOf(options.theory), l, m), options.form ?? 'roots', grassmannian) as ProductJson;
+  // Theories without a built-in puzzle rule (equivariant-k-theory, ssm-chern) by localization, as the CLI does.
+  const product = typeof options.theory === 'string' && isLocalizationOnly(options.theory) ? localizationProduct(options.theory, l, m) : expandProduct(theoryOf(options.theory), l, m);
+  return productJson(product, options.form ?? 'roots', grassmannian) as ProductJson;
 }
 
 /** Every nonzero structure constant of Gr(k, n) (the `table --format json` object). */
 export async function table(options: { readonly theory: TheoryInput; readonly grassmannian: readonly [number, number]; readonly form?: ValueForm; readonly workers?: number }): Promise<TableJson> {
-  const pieces = theoryOf(options.theory);
   const g: Grassmannian = { k: options.grassmannian[0], n: options.grassmannian[1] };
+  if (typeof options.theory === 'string' && isLocalizationOnly(options.theory)) {
+    return tableJson(options.theory, g, localizationTableRows(options.theory, parseGrassmannian(`${g.k},${g.n}`, 'grassmannian')), options.form ?? 'roots') as TableJson;
+  }
+  const pieces = theoryOf(options.theory);
   const rows = await structureTable(pieces, g, { workers: options.workers ?? 1 });
   return tableJson(pieces.name, g, rows, options.form ?? 'roots') as TableJson;
 }

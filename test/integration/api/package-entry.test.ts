@@ -37,4 +37,16 @@ describe('the library entry (built dist)', () => {
       ['21', -1],
     ]);
   });
+
+  it('tabulates and expands theories known by localization only, as the CLI does', async () => {
+    const api = (await import(entry)) as typeof import('../../../src/index.js');
+    // c_SM of P¹ solved by hand from c(C)|_01 = 1 − χ, c(C)|_10 = 1, c(pt)|_10 = χ, χ = y2 − y1: c(pt)² = χ·c(pt).
+    const t = await api.table({ theory: 'ssm-chern', grassmannian: [1, 2] });
+    expect(t.theory).toBe('ssm-chern');
+    expect(t.entries.map((e) => `${e.lambda},${e.mu},${e.nu}`)).toEqual(['01,01,01', '01,01,10', '01,10,10', '10,01,10', '10,10,10']);
+    expect(t.entries.at(-1)!.value).toMatchObject({ text: 'y2 - y1' });
+    // [O_line]² = (1 − t2/t3)[O_line] + (t2/t3)[O_pt] in K_T(P²), by hand from the restrictions (1 − t_i/t_j products).
+    const p = api.expand({ theory: 'equivariant-k-theory', lambda: '010', mu: '010' });
+    expect(p.products.map((x) => x.nu)).toEqual(['010', '100']);
+  });
 });
