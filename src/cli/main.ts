@@ -13,14 +13,14 @@ const argv = joinDashValues(process.argv.slice(2));
 const json = argv.includes('--json');
 const asksHelp = argv.includes('--help') || argv.includes('-h') || argv.includes('--version');
 
-/** Defined (true) only in the bundle that scripts/bundle-cli.mjs builds, together with help.txt. */
+/** Defined (true) only in the bundle that src/build/bundle-cli.mjs builds, together with help.txt. */
 declare const PUZZLESWEEP_BUNDLE: true | undefined;
 
 /** Set to render `--help` with yargs even when the build's copy of it exists (the build sets it to make that copy). */
 const RENDER_HELP_ENV = 'PUZZLESWEEP_RENDER_HELP';
 
 /**
- * The top-level help as yargs rendered it at build time (scripts/bundle-cli.mjs writes dist/cli/help.txt), when
+ * The top-level help as yargs rendered it at build time (src/build/bundle-cli.mjs writes dist/cli/help.txt), when
  * it applies: yargs wraps at min(80, terminal columns), so the copy serves only 80 columns or more.
  */
 function builtHelp(): string | undefined {

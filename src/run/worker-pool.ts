@@ -9,7 +9,7 @@ import type { WorkerReply, WorkerTask } from './worker-task.js';
 export const MAX_ATTEMPTS = 3;
 
 // The worker always runs compiled JavaScript: under vitest this module is a .ts source in src/, so point at dist/.
-// The build's one-file bundle of the worker (scripts/bundle-worker.mjs) starts faster than ~60 modules.
+// The build's one-file bundle of the worker (src/build/bundle-worker.mjs) starts faster than ~60 modules.
 // '../run/' resolves to dist/run/ both from this module (dist/run/) and from the CLI's bundle (dist/cli/).
 function workerEntryUrl(): string {
   const here = fileURLToPath(import.meta.url);

@@ -135,7 +135,7 @@ export default async function pipelineBenchmark(): Promise<string> {
       row('`puzzlesweep count` (Gr(2,4) triple)', count),
       row('`puzzlesweep status` (small store)', status),
       '',
-      'Goal: `--help`, `count` and `status` within 120 ms of `node -e 0`. Only the invoked command is loaded (src/cli/command-registry.ts); dist/cli/main.js is an esbuild bundle (scripts/bundle-cli.mjs) and `--help` prints the copy yargs rendered at build time.',
+      'Goal: `--help`, `count` and `status` within 120 ms of `node -e 0`. Only the invoked command is loaded (src/cli/command-registry.ts); dist/cli/main.js is an esbuild bundle (src/build/bundle-cli.mjs) and `--help` prints the copy yargs rendered at build time.',
     ].join('\n');
   } finally {
     rmSync(dir, { recursive: true, force: true });

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { COMMANDS } from '../../src/cli/command-registry.js';
 import { CLI, cli } from './cli-process.js';
 
-// The start-up work (issue 8): dist/cli/main.js is an esbuild bundle (scripts/bundle-cli.mjs), `--help` prints
+// The start-up work (issue 8): dist/cli/main.js is an esbuild bundle (src/build/bundle-cli.mjs), `--help` prints
 // the copy yargs rendered at build time, and yargs no longer renders a command's help before running it.
 describe('CLI start-up shortcuts keep the output', () => {
   it("prints the build's copy of --help byte for byte as yargs renders it (common practice, no source)", () => {

@@ -9,7 +9,7 @@ import { readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-const root = join(dirname(fileURLToPath(import.meta.url)), '..');
+const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outdir = join(root, 'dist', 'cli');
 // Commands bundled into the entry's chunks; every other command module is loaded from tsc's dist/cli/commands.
 const BUNDLED = new Set(['count', 'status', 'show', 'expand', 'schema', 'counterexamples', 'replay', 'report', 'merge', 'run-claims']);
@@ -73,7 +73,7 @@ const result = await build({
 // A bundled module that resolves a path from its own location would now resolve it from dist/cli/.
 const moved = Object.keys(result.metafile.inputs).filter((f) => f.startsWith('src/') && f !== 'src/cli/main.ts' && !LOCATION_FREE.has(f) && readFileSync(join(root, f), 'utf8').includes('import.meta'));
 if (moved.length > 0) {
-  process.stderr.write(`bundle-cli: expected no bundled module to use import.meta, received ${moved.join(', ')}\nhint: leave its command out of BUNDLED in scripts/bundle-cli.mjs\n`);
+  process.stderr.write(`bundle-cli: expected no bundled module to use import.meta, received ${moved.join(', ')}\nhint: leave its command out of BUNDLED in src/build/bundle-cli.mjs\n`);
   process.exit(1);
 }
 
