@@ -92,17 +92,29 @@ function checkPieces(pieces: readonly NaivePiece[]): void {
   });
 }
 
+// Formula weights by place: reading the text again for every boundary of a sweep dominated its time.
+const formulaCache = new Map<string, RefRational>();
+
+/** How the backtracking sums weights: the exact quotient of polynomials, or a value at a point. */
+export interface NaiveWeightAlgebra<W> {
+  one: W;
+  zero: W;
+  add(a: W, b: W): W;
+  mul(a: W, b: W): W;
+  /** A piece's weight at its place, given as a quotient of polynomials (variables as in `naiveCount`). */
+  lift(w: RefRational): W;
+}
+
 /**
- * Counts puzzles on a hexagonal region by plain backtracking over its unit triangles (bottom row first,
- * left to right), matching labels on shared edges. Position weights are y_j − y_i with i = x+1 and
- * j = 1 + the least x+y over the triangle's vertices (y_t is polynomial variable t−1, t = 1..N with N the
- * completed side); named variables, sorted by name, are the variables N, N+1, … after them.
+ * The backtracking behind `naiveCount`, generic in how weights are summed: Σ over fillings of the product
+ * of piece weights in the algebra `makeAlgebra` builds for the region's layout, with the number of fillings and the named variables (sorted).
  */
-export function naiveCount(
+export function naiveSum<W>(
   sides: readonly number[],
   boundary: readonly string[],
   pieces: readonly NaivePiece[],
-): NaiveCountResult {
+  makeAlgebra: (layout: { N: number; variableNames: readonly string[] }) => NaiveWeightAlgebra<W>,
+): { fillings: bigint; value: W; variableNames: string[] } {
   checkInput(sides, boundary);
   checkPieces(pieces);
   const [s1, s2, , s4, , s6] = sides as [number, number, number, number, number, number];
@@ -131,17 +143,33 @@ export function naiveCount(
     // The least x+y is at (x,y) for an up triangle and at (x+1,y) or (x,y+1) for a down one.
     const i = t.x + 1;
     const j = t.x + t.y + (t.up ? 0 : 1) + 1;
-    if (w.type === 'formula') return evaluateFormulaText(w.text, { i, j }, (name) => RefPolynomial.variable(N + names.indexOf(name)));
+    if (w.type === 'formula') {
+      const key = `${N}|${names.join(',')}|${i},${j}|${w.text}`;
+      let v = formulaCache.get(key);
+      if (v === undefined) formulaCache.set(key, (v = evaluateFormulaText(w.text, { i, j }, (name) => RefPolynomial.variable(N + names.indexOf(name)))));
+      return v;
+    }
     return rational(RefPolynomial.difference(j - 1, i - 1));
   };
+  const algebra = makeAlgebra({ N, variableNames: names });
   const byOrientation = { up: pieces.filter((p) => p.orientation === 'up'), down: pieces.filter((p) => p.orientation === 'down') };
+  // A piece's weight depends only on its place: lift it once per (triangle, piece).
+  const lifted = triangles.map(() => new Map<NaivePiece, W | null>());
+  const liftedWeight = (index: number, p: NaivePiece): W | null => {
+    const cache = lifted[index]!;
+    if (!cache.has(p)) {
+      const w = weightOf(p, triangles[index]!);
+      cache.set(p, w === null ? null : algebra.lift(w));
+    }
+    return cache.get(p)!;
+  };
 
   let fillings = 0n;
-  let value = rational(RefPolynomial.zero());
-  const place = (index: number, weight: RefRational): void => {
+  let value = algebra.zero;
+  const place = (index: number, weight: W): void => {
     if (index === triangles.length) {
       fillings++;
-      value = rationalAdd(value, weight);
+      value = algebra.add(value, weight);
       return;
     }
     const t = triangles[index]!;
@@ -157,20 +185,42 @@ export function naiveCount(
         } else if (have !== p.labels[s]!) fits = false;
       }
       if (fits) {
-        const w = weightOf(p, t);
-        place(index + 1, w === null ? weight : rationalMul(weight, w));
+        const w = liftedWeight(index, p);
+        place(index + 1, w === null ? weight : algebra.mul(weight, w));
       }
       for (const e of fresh) labels.delete(e);
     }
   };
-  place(0, rational(RefPolynomial.constant(1n)));
-  const quotient = value;
+  place(0, algebra.one);
+  return { fillings, value, variableNames: names };
+}
+
+const quotientAlgebra: NaiveWeightAlgebra<RefRational> = {
+  one: rational(RefPolynomial.constant(1n)),
+  zero: rational(RefPolynomial.zero()),
+  add: rationalAdd,
+  mul: rationalMul,
+  lift: (w) => w,
+};
+
+/**
+ * Counts puzzles on a hexagonal region by plain backtracking over its unit triangles (bottom row first,
+ * left to right), matching labels on shared edges. Position weights are y_j − y_i with i = x+1 and
+ * j = 1 + the least x+y over the triangle's vertices (y_t is polynomial variable t−1, t = 1..N with N the
+ * completed side); named variables, sorted by name, are the variables N, N+1, … after them.
+ */
+export function naiveCount(
+  sides: readonly number[],
+  boundary: readonly string[],
+  pieces: readonly NaivePiece[],
+): NaiveCountResult {
+  const { fillings, value: quotient, variableNames } = naiveSum(sides, boundary, pieces, () => quotientAlgebra);
   return {
     fillings,
     quotient,
     get value(): RefPolynomial {
       return quotient.num.divExact(quotient.den);
     },
-    variableNames: names,
+    variableNames,
   };
 }

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { referenceTable, type ReferenceTheory } from '../../../src/reference/crosscheck-tables.js';
 import { grassmannianStrings } from '../../../src/reference/grassmannian-strings.js';
 import { naiveCount, type NaivePiece } from '../../../src/reference/naive-count.js';
+import { naiveCountAtPoints } from '../../../src/reference/naive-count-at-point.js';
 import { RefPolynomial } from '../../../src/reference/ref-polynomial.js';
 import {
   cohomologyPieces,
@@ -62,6 +63,19 @@ describe('naive puzzle counter', () => {
       }
     });
   }
+
+  it('at points: three up triangles of weight a/2 give (a/2)^3, reduced: 27/8 at a = 3, 8 at a = 4 (worked by hand)', () => {
+    const pieces: NaivePiece[] = [
+      { orientation: 'up', labels: ['0', '0', '0'], weight: { type: 'formula', text: 'a/2' } },
+      { orientation: 'down', labels: ['0', '0', '0'], weight: { type: 'integer', value: 1 } },
+    ];
+    const zeros = ['0', '0', '0', '0', '0', '0'];
+    const at = (a: bigint) => ({ y: () => 0n, parameter: () => a });
+    expect(naiveCountAtPoints([1, 1, 1, 1, 1, 1], zeros, pieces, [at(3n), at(4n)]).values).toEqual([{ num: 27n, den: 8n }, { num: 8n, den: 1n }]);
+    // A weight whose denominator vanishes at the point is refused, not read as infinity.
+    const pole: NaivePiece[] = [{ ...pieces[0]!, weight: { type: 'formula', text: '1/(a - 3)' } }, pieces[1]!];
+    expect(() => naiveCountAtPoints([1, 1, 1, 1, 1, 1], zeros, pole, [at(3n)])).toThrow(expect.objectContaining({ code: 'division_by_zero' }));
+  });
 
   it('rejects a hexagon that does not close and a boundary of the wrong length, with coded errors', () => {
     expect(() => naiveCount([1, 1, 1, 1, 2, 1], ['0', '0', '0', '0', '00', '0'], [])).toThrowError(
