@@ -7,27 +7,15 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { timed, type TimedRun } from './timed-process.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, '..', '..');
 const cli = join(root, 'dist', 'cli', 'main.js');
 const python = join(here, 'python-dp.py');
 
-interface Run {
-  wall: number;
-  cpu: number;
-  rssMB: number;
-  out: string;
-  stopped: boolean;
-}
+type Run = TimedRun;
 
-// One whole process under /usr/bin/time; `limit` seconds of wall time before it is stopped.
-function timed(cmd: string[], limit: number): Run {
-  const r = spawnSync('/usr/bin/time', ['-f', 'TIME %e %U %S %M', 'timeout', String(limit), ...cmd], { encoding: 'utf8', maxBuffer: 1 << 28, cwd: root });
-  const line = (r.stderr.split('\n').find((l) => l.startsWith('TIME ')) ?? 'TIME 0 0 0 0').split(' ');
-  const [wall, user, sys, kb] = line.slice(1).map(Number) as [number, number, number, number];
-  return { wall, cpu: user + sys, rssMB: Math.round(kb / 1024), out: r.stdout, stopped: r.status === 124 || r.status === null };
-}
 
 const reverse = (s: string) => [...s].reverse().join('');
 const s = (x: number) => (x >= 10 ? x.toFixed(1) : x.toFixed(2));

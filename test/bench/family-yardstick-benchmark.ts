@@ -11,27 +11,15 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { timed, type TimedRun } from './timed-process.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, '..', '..');
 const cli = join(root, 'dist', 'cli', 'main.js');
 const python = join(here, 'python-dp.py');
 
-interface Run {
-  wall: number;
-  cpu: number;
-  rssMB: number;
-  out: string;
-  status: number | null;
-}
+type Run = TimedRun;
 
-// One whole process under /usr/bin/time (wall, user + system of every thread, peak resident memory).
-function timed(cmd: string[], limit = 900): Run {
-  const r = spawnSync('/usr/bin/time', ['-f', 'TIME %e %U %S %M', 'timeout', String(limit), ...cmd], { encoding: 'utf8', maxBuffer: 1 << 28, cwd: root });
-  const line = (r.stderr.split('\n').find((l) => l.startsWith('TIME ')) ?? 'TIME 0 0 0 0').split(' ');
-  const [wall, user, sys, kb] = line.slice(1).map(Number) as [number, number, number, number];
-  return { wall, cpu: user + sys, rssMB: Math.round(kb / 1024), out: r.stdout, status: r.status };
-}
 
 // The median run by wall time (CPU and memory of that same run).
 function median<R extends Run>(runs: R[]): R {
