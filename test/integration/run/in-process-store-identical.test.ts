@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { cli, query } from '../../e2e/cli-process.js';
 import { exchangeReverseClaim } from '../../support/exchange-reverse-brute-force.js';
+import { expectSameStore } from '../../support/same-store.js';
 
 // A sweep in the main thread (--workers 0, or a small family without --workers) must write exactly the
 // store a sweep on worker threads writes: same chunks and tallies, same counterexample rows (pair partners
@@ -11,13 +12,6 @@ import { exchangeReverseClaim } from '../../support/exchange-reverse-brute-force
 
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-in-process-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
-
-// Bookkeeping that differs between any two runs: ids, times, hosts, options.
-const bookkeeping = /(_run|_at|^run_id|^chunk_id|^duration_ms|^pid|^host|^process_start|^options_json|^heartbeat_at)$/;
-
-function rows(db: string, table: string, order: string): Record<string, unknown>[] {
-  return query<Record<string, unknown>>(db, `SELECT * FROM ${table} ORDER BY ${order}`).map((r) => Object.fromEntries(Object.entries(r).filter(([k]) => !bookkeeping.test(k))));
-}
 
 function sweep(claim: string, name: string, workers: string[], env: Record<string, string> = {}): string {
   const db = join(dir, `${name}-${workers.join('') || 'default'}-${Object.keys(env).length}.sqlite`);
@@ -28,19 +22,6 @@ function sweep(claim: string, name: string, workers: string[], env: Record<strin
 }
 
 const workersOf = (db: string) => query<{ options_json: string }>(db, 'SELECT options_json FROM runs').map((r) => (JSON.parse(r.options_json) as { workers: number }).workers);
-
-function expectSameStore(a: string, b: string): void {
-  for (const [table, order] of [
-    ['chunks', 'class_key, start_index'],
-    ['counterexamples', 'class_key, instance_index'],
-    ['verified_classes', 'class_key, method'],
-    ['runs', 'run_id'],
-  ] as const) {
-    const x = rows(a, table, order);
-    if (table === 'chunks') expect(x.length, 'a store without chunks compares nothing').toBeGreaterThan(0);
-    expect(x, table).toEqual(rows(b, table, order));
-  }
-}
 
 const written = (file: string, data: object) => {
   const path = join(dir, file);
