@@ -26,9 +26,11 @@ export const isRunColumn = (c: string) => c === 'run_id' || c.endsWith('_run');
 
 /**
  * Bookkeeping that may differ between two copies of the same result: when and by which run it was
- * written, how long it took, and the re-check of a stored counterexample (compared separately).
+ * written, how long it took, the re-check of a stored counterexample (compared separately), and whether
+ * an older store's partner was derived yet (a later run derives it again harmlessly).
  */
-export const isBookkeeping = (c: string) => isRunColumn(c) || c.endsWith('_at') || c === 'duration_ms' || c === 'recheck' || c === 'chunk_id';
+export const isBookkeeping = (c: string) =>
+  isRunColumn(c) || c.endsWith('_at') || c === 'duration_ms' || c === 'recheck' || c === 'chunk_id' || c === 'partner_pending';
 
 /** A value as comparable text (bigint and number of the same integer agree). */
 export function valueText(v: unknown): string {
