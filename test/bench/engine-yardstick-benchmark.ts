@@ -8,6 +8,7 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { timed, type TimedRun } from './timed-process.js';
+import { TRIPLES } from './yardstick-triples.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, '..', '..');
@@ -25,16 +26,6 @@ const pyText = (r: Run, key: 'wall' | 'cpu') => (r.stopped ? `stopped at ${s(r[k
 const countNode = (theory: string, l: string, m: string, n: string, limit = 600) => timed(['node', cli, 'count', '--theory', theory, '--triangle', `${l},${m},${n}`, '--form', 'expanded', '--json'], limit);
 const countPython = (theory: string, l: string, m: string, n: string, limit: number) => timed(['python3', python, 'count', theory, `${l},-,${m},-,${reverse(n)},-`], limit);
 
-// Triples (λ, μ, ν) with inv(ν) = inv(λ) + inv(μ), ν drawn by a seeded random walk and kept when its
-// cohomology coefficient was the largest of six draws (chosen once, not timed; n = 20 is the issue's).
-const TRIPLES: Record<number, [string, string, string]> = {
-  12: ['001010101011', '000101010111', '010101010110'],
-  16: ['0001010101010111', '0000101010101111', '0101001001110110'],
-  20: ['00001010101010101111', '00000101011010101111', '00101010101011010101'],
-  24: ['000010101010101010101111', '000001010101010101011111', '100011010001101101100110'],
-  28: ['0000010101010101010101011111', '0000001010101010101010111111', '1100001100001011011010110110'],
-  30: ['000000101010101010101010111111', '000000010101011010101010111111', '110000101000011011011000111110'],
-};
 
 export default async function yardstickBenchmark(): Promise<string> {
   const lines = ['## Engine against a Python yardstick', ''];

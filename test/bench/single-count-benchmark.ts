@@ -9,6 +9,7 @@ import { loadavg, tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { timed, type TimedRun } from './timed-process.js';
+import { TRIPLES } from './yardstick-triples.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, '..', '..');
@@ -17,21 +18,11 @@ const python = join(here, 'python-dp.py');
 
 type Run = TimedRun;
 
-
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 const reverse = (s: string) => [...s].reverse().join('');
 const sec = (x: number) => (x >= 10 ? x.toFixed(1) : x.toFixed(2));
 const ms = (x: number) => `${Math.round(x * 1000)}`;
 
-// Triples (λ, μ, ν) with inv(ν) = inv(λ) + inv(μ), as in engine-yardstick-benchmark.ts (n = 20 is the issue's).
-const TRIPLES: Record<number, [string, string, string]> = {
-  12: ['001010101011', '000101010111', '010101010110'],
-  16: ['0001010101010111', '0000101010101111', '0101001001110110'],
-  20: ['00001010101010101111', '00000101011010101111', '00101010101011010101'],
-  24: ['000010101010101010101111', '000001010101010101011111', '100011010001101101100110'],
-  28: ['0000010101010101010101011111', '0000001010101010101010111111', '1100001100001011011010110110'],
-  30: ['000000101010101010101010111111', '000000010101011010101010111111', '110000101000011011011000111110'],
-};
 const countArgs = (theory: string, [l, m, n]: [string, string, string]) => [process.execPath, cli, 'count', '--theory', theory, '--triangle', `${l},${m},${n}`, '--json'];
 const pythonArgs = (theory: string, [l, m, n]: [string, string, string]) => ['python3', python, 'count', theory, `${l},-,${m},-,${reverse(n)},-`];
 

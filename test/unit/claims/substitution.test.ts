@@ -1,24 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { CodedError } from '../../../src/errors/index.js';
 import { createEvaluator, parseClaim, planClaim } from '../../../src/claims/index.js';
 import { countBoundary, makeRegion, polyEquals, polynomialSemiring, substitutePoly, theoryPieceSet } from '../../../src/engine/index.js';
 import { allPermutations, blockReversals, isInvolution, permutationKey, substitutionFor } from '../../../src/claims/substitution.js';
 import type { SubstitutionStep } from '../../../src/claims/claim-schema.js';
 import { expectDeterministicEnumeration } from '../../helpers/contracts.js';
+import { codedFailure } from '../../helpers/coded-failure.js';
 
 // Every expected permutation below is worked out by hand from the step definitions in the claim schema
 // (y_m ↦ y_σ(m), listed as the images σ(1..M)); "by hand" means no source beyond those definitions.
 const sigma = (steps: SubstitutionStep[], m: number, values: Record<string, number> = {}) => substitutionFor(steps, values, m);
-
-function failure(run: () => unknown): CodedError {
-  try {
-    run();
-  } catch (e) {
-    if (e instanceof CodedError) return e;
-    throw e;
-  }
-  throw new Error('accepted');
-}
 
 describe('substitution steps', () => {
   it('reverseBlock 2..4 on y1..y5 is [1,4,3,2,5] (by hand: y_m ↦ y_(2+4−m) inside the block)', () => {
@@ -53,11 +43,11 @@ describe('substitution steps', () => {
   });
 
   it('rejects a block outside y1..yM and too many images with a coded error naming the step', () => {
-    const block = failure(() => sigma([{ type: 'reverseBlock', from: 1, to: 2 }, { type: 'shiftBlock', from: 2, to: 5, by: 1 }], 4));
+    const block = codedFailure(() => sigma([{ type: 'reverseBlock', from: 1, to: 2 }, { type: 'shiftBlock', from: 2, to: 5, by: 1 }], 4));
     expect(block.code).toBe('invalid_claim');
     expect(block.message).toMatch(/expected 1 ≤ from ≤ to ≤ 4, received from = 2, to = 5/);
     expect(block.path).toBe('compare.relation.substitution[1]');
-    const images = failure(() => sigma([{ type: 'explicit', images: [2, 1, 3] }], 2));
+    const images = codedFailure(() => sigma([{ type: 'explicit', images: [2, 1, 3] }], 2));
     expect(images.message).toMatch(/expected at most 2 entries, received 3/);
     expect(images.path).toBe('compare.relation.substitution[0].images');
   });

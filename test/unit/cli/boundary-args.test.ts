@@ -1,16 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseBoundary, parseBoundaryArgs, triangleEchoJson } from '../../../src/cli/boundary-args.js';
-import { CodedError } from '../../../src/errors/index.js';
-
-function failure(run: () => unknown): CodedError {
-  try {
-    run();
-  } catch (e) {
-    if (e instanceof CodedError) return e;
-    throw e;
-  }
-  throw new Error('accepted');
-}
+import { codedFailure } from '../../helpers/coded-failure.js';
 
 describe('boundary arguments', () => {
   it('reads --triangle λ,μ,ν as the clockwise sides λ, -, μ, -, reverse(ν), - (README, "Counting one boundary")', () => {
@@ -29,12 +19,12 @@ describe('boundary arguments', () => {
   });
 
   it('names the flag and the fix when the input is wrong', () => {
-    expect(failure(() => parseBoundaryArgs({})).path).toBe('--triangle / --partitions / --sides');
-    expect(failure(() => parseBoundaryArgs({ triangle: '01,01,01', sides: '01,-,01,-,10,-' })).message).toMatch(/received both/);
-    const count = failure(() => parseBoundaryArgs({ sides: '01,01' }));
+    expect(codedFailure(() => parseBoundaryArgs({})).path).toBe('--triangle / --partitions / --sides');
+    expect(codedFailure(() => parseBoundaryArgs({ triangle: '01,01,01', sides: '01,-,01,-,10,-' })).message).toMatch(/received both/);
+    const count = codedFailure(() => parseBoundaryArgs({ sides: '01,01' }));
     expect(count.message).toBe("--sides: expected six comma-separated strings, received 2 ('01,01')");
     expect(count.hint).toMatch(/'-'/);
-    expect(failure(() => parseBoundaryArgs({ triangle: '01,011,01' })).message).toMatch(/^--triangle: expected λ,μ,ν of one length, received lengths 2, 3, 2$/);
-    expect(failure(() => parseBoundaryArgs({ partitions: '1,1,2' })).path).toBe('--grassmannian');
+    expect(codedFailure(() => parseBoundaryArgs({ triangle: '01,011,01' })).message).toMatch(/^--triangle: expected λ,μ,ν of one length, received lengths 2, 3, 2$/);
+    expect(codedFailure(() => parseBoundaryArgs({ partitions: '1,1,2' })).path).toBe('--grassmannian');
   });
 });

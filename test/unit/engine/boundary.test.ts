@@ -1,16 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checkBoundary, makeRegion, reverseString, structureConstantSides, theoryPieceSet } from '../../../src/engine/index.js';
-import { CodedError } from '../../../src/errors/index.js';
-
-function failure(run: () => unknown): CodedError {
-  try {
-    run();
-  } catch (e) {
-    if (e instanceof CodedError) return e;
-    throw e;
-  }
-  throw new Error('accepted');
-}
+import { codedFailure } from '../../helpers/coded-failure.js';
 
 const cohomology = theoryPieceSet('cohomology');
 
@@ -27,19 +17,19 @@ describe('boundaries', () => {
   });
 
   it('names the side, the expected length and the fix when a side is too long or short', () => {
-    const e = failure(() => checkBoundary(makeRegion([2, 0, 2, 0, 2, 0]), ['01', '', '011', '', '10', ''], cohomology));
+    const e = codedFailure(() => checkBoundary(makeRegion([2, 0, 2, 0, 2, 0]), ['01', '', '011', '', '10', ''], cohomology));
     expect(e.code).toBe('invalid_boundary');
     expect(e.path).toBe('sides[2]');
     expect(e.message).toBe("Side 3 (down-right): expected 2 labels, received 3 ('011')");
-    const empty = failure(() => checkBoundary(makeRegion([2, 0, 2, 0, 2, 0]), ['01', '1', '01', '', '10', ''], cohomology));
+    const empty = codedFailure(() => checkBoundary(makeRegion([2, 0, 2, 0, 2, 0]), ['01', '1', '01', '', '10', ''], cohomology));
     expect(empty.hint).toMatch(/empty side/);
   });
 
   it('rejects labels outside the alphabet, six sides only, and an open side other than side 5', () => {
     const region = makeRegion([1, 0, 1, 0, 1, 0]);
-    const bad = failure(() => checkBoundary(region, ['2', '', '0', '', '1', ''], cohomology));
+    const bad = codedFailure(() => checkBoundary(region, ['2', '', '0', '', '1', ''], cohomology));
     expect(bad.message).toMatch(/^Side 1 \(up-right\): expected labels from '0' \| '1', received '2'/);
-    expect(failure(() => checkBoundary(region, ['0', '', '0', '', '1'], cohomology)).message).toBe('Boundary: expected 6 side strings, received 5');
-    expect(failure(() => checkBoundary(region, [null, '', '0', '', '1', ''], cohomology)).code).toBe('internal_error');
+    expect(codedFailure(() => checkBoundary(region, ['0', '', '0', '', '1'], cohomology)).message).toBe('Boundary: expected 6 side strings, received 5');
+    expect(codedFailure(() => checkBoundary(region, [null, '', '0', '', '1', ''], cohomology)).code).toBe('internal_error');
   });
 });
