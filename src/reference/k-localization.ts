@@ -1,4 +1,5 @@
 import { checkGrassmannian, grassmannianStrings, inv } from './grassmannian-strings.js';
+import { solveAtFixedPoints } from './fixed-point-solve.js';
 import { RefLaurent } from './ref-laurent.js';
 
 // Equivariant K-theory of Gr(k, n): K_T(pt) = ℤ[t_1^{±1}, …, t_n^{±1}], t_p = e^{y_p} (t_p has variable
@@ -77,32 +78,17 @@ export function kRestrictionTable(k: number, n: number): Map<string, Map<string,
  */
 /** With `only`, just the products of that one pair (λ, μ). */
 export function kLocalizationTable(k: number, n: number, only?: readonly [string, string]): Map<string, RefLaurent> {
-  const strings = grassmannianStrings(k, n);
   const res = kRestrictionTable(k, n);
   const at = (lam: string, w: string): RefLaurent | undefined => res.get(lam)!.get(w);
-  const table = new Map<string, RefLaurent>();
-  strings.forEach((lam, li) => {
-    for (let mi = li; mi < strings.length; mi++) {
-      const mu = strings[mi]!;
-      if (only && !((only[0] === lam && only[1] === mu) || (only[0] === mu && only[1] === lam))) continue;
-      const found: Array<[string, RefLaurent]> = [];
-      for (const w of strings) {
-        const lw = at(lam, w);
-        const mw = at(mu, w);
-        if (lw === undefined || mw === undefined) continue;
-        let rem = lw.mul(mw);
-        for (const [nu, c] of found) {
-          const nw = at(nu, w);
-          if (nw !== undefined) rem = rem.sub(c.mul(nw));
-        }
-        if (rem.isZero()) continue;
-        found.push([w, rem.divExact(at(w, w)!)]);
-      }
-      for (const [nu, c] of found) {
-        table.set(`${lam},${mu},${nu}`, c);
-        table.set(`${mu},${lam},${nu}`, c);
-      }
-    }
-  });
-  return table;
+  return solveAtFixedPoints<RefLaurent, RefLaurent>(
+    {
+      strings: grassmannianStrings(k, n),
+      at,
+      product: (lw, mw) => lw.mul(mw),
+      subtract: (rem, c, nw) => rem.sub(c.mul(nw)),
+      isZero: (v) => v.isZero(),
+      solve: (rem, w) => rem.divExact(at(w, w)!),
+    },
+    only,
+  );
 }

@@ -1,4 +1,5 @@
 import { checkGrassmannian, checkString, grassmannianStrings, inv } from './grassmannian-strings.js';
+import { solveAtFixedPoints } from './fixed-point-solve.js';
 import { RefPolynomial } from './ref-polynomial.js';
 
 // Conventions: the simple reflection s_i (1 ≤ i < n) swaps positions i, i+1 of a string and variables
@@ -103,34 +104,15 @@ export function restrictionTable(k: number, n: number): Map<string, Map<string, 
  * [X_λ]|_w·[X_μ]|_w = Σ_ν c_{λμ}^ν(y)·[X_ν]|_w solved point by point in increasing inv(w).
  */
 export function localizationTable(k: number, n: number): Map<string, RefPolynomial> {
-  const strings = grassmannianStrings(k, n);
   const res = restrictionTable(k, n);
   const at = (lam: string, w: string): RefPolynomial | undefined => res.get(lam)!.get(w);
-  const table = new Map<string, RefPolynomial>();
-  strings.forEach((lam, li) => {
-    for (let mi = li; mi < strings.length; mi++) {
-      const mu = strings[mi]!;
-      const found: Array<[string, RefPolynomial]> = [];
-      for (const w of strings) {
-        // [X_λ]|_w = 0 unless λ ≤ w; then every ν ≤ w with c^ν ≠ 0 would satisfy λ ≤ ν ≤ w, so c^w = 0 too.
-        const lw = at(lam, w);
-        const mw = at(mu, w);
-        if (lw === undefined || mw === undefined) continue;
-        let rem = lw.mul(mw);
-        for (const [nu, c] of found) {
-          const nw = at(nu, w);
-          if (nw !== undefined) rem = rem.sub(c.mul(nw));
-        }
-        if (rem.isZero()) continue;
-        const c = rem.divExact(at(w, w)!);
-        found.push([w, c]);
-      }
-      for (const [nu, c] of found) {
-        table.set(`${lam},${mu},${nu}`, c);
-        table.set(`${mu},${lam},${nu}`, c);
-      }
-    }
+  return solveAtFixedPoints<RefPolynomial, RefPolynomial>({
+    strings: grassmannianStrings(k, n),
+    at,
+    product: (lw, mw) => lw.mul(mw),
+    subtract: (rem, c, nw) => rem.sub(c.mul(nw)),
+    isZero: (v) => v.isZero(),
+    solve: (rem, w) => rem.divExact(at(w, w)!),
   });
-  return table;
 }
 

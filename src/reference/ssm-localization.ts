@@ -1,4 +1,5 @@
 import { checkGrassmannian, grassmannianStrings, inv } from './grassmannian-strings.js';
+import { solveAtFixedPoints } from './fixed-point-solve.js';
 import { pointString, productOverInversions, swapPositions } from './k-localization.js';
 import { RefFraction, type ChernFactorKey } from './ref-fraction.js';
 import { RefPolynomial } from './ref-polynomial.js';
@@ -93,36 +94,25 @@ export type SchwartzMacPherson = 'ssm' | 'csm';
  */
 /** With `only`, just the products of that one pair (λ, μ). */
 export function schwartzMacPhersonTable(kind: SchwartzMacPherson, k: number, n: number, only?: readonly [string, string]): Map<string, RefFraction> {
-  const strings = grassmannianStrings(k, n);
   const res = csmRestrictionTable(k, n);
-  const at = (lam: string, w: string): RefPolynomial | undefined => res.get(lam)!.get(w);
-  const table = new Map<string, RefFraction>();
-  strings.forEach((lam, li) => {
-    for (let mi = li; mi < strings.length; mi++) {
-      const mu = strings[mi]!;
-      if (only && !((only[0] === lam && only[1] === mu) || (only[0] === mu && only[1] === lam))) continue;
-      const found: Array<[string, RefFraction]> = [];
-      for (const w of strings) {
-        const lw = at(lam, w);
-        const mw = at(mu, w);
-        if (lw === undefined || mw === undefined) continue;
-        // ssm: c_λ c_μ / c(TGr) = Σ e^ν c_ν at w; csm: c_λ c_μ = Σ d^ν c_ν.
-        let rem = RefFraction.fromPolynomial(lw.mul(mw));
-        if (kind === 'ssm') rem = rem.divFactors(tangentFactors(w));
-        for (const [nu, c] of found) {
-          const nw = at(nu, w);
-          if (nw !== undefined) rem = rem.sub(c.mul(RefFraction.fromPolynomial(nw)));
-        }
-        if (rem.isZero()) continue;
+  return solveAtFixedPoints<RefPolynomial, RefFraction>(
+    {
+      strings: grassmannianStrings(k, n),
+      at: (lam, w) => res.get(lam)!.get(w),
+      // ssm: c_λ c_μ / c(TGr) = Σ e^ν c_ν at w; csm: c_λ c_μ = Σ d^ν c_ν.
+      product: (lw, mw, w) => {
+        const p = RefFraction.fromPolynomial(lw.mul(mw));
+        return kind === 'ssm' ? p.divFactors(tangentFactors(w)) : p;
+      },
+      subtract: (rem, c, nw) => rem.sub(c.mul(RefFraction.fromPolynomial(nw))),
+      isZero: (v) => v.isZero(),
+      solve: (rem, w) => {
         // One normal root at a time: division by a linear form is synthetic, by their product it is not.
-        for (const r of normalRoots(w)) rem = rem.divPolynomial(r);
-        found.push([w, rem.divFactors(cellFactors(w)).reduced()]);
-      }
-      for (const [nu, c] of found) {
-        table.set(`${lam},${mu},${nu}`, c);
-        table.set(`${mu},${lam},${nu}`, c);
-      }
-    }
-  });
-  return table;
+        let r = rem;
+        for (const root of normalRoots(w)) r = r.divPolynomial(root);
+        return r.divFactors(cellFactors(w)).reduced();
+      },
+    },
+    only,
+  );
 }
