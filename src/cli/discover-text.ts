@@ -4,7 +4,7 @@ const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
 
 function ruleText(r: DiscoverResult['survivors'][number]['evidence']['permutationRule']): string {
   if (!r) return '';
-  return r.type === 'identity' ? 'y unchanged' : `reverse y_(${r.from})..y_(${r.to})`;
+  return r.relation.type === 'equal' ? 'y unchanged' : r.text;
 }
 
 /** The text report of a discover run. */

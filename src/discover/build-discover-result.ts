@@ -1,6 +1,6 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { parseClaim, type ClaimInput, type SizeClass } from '../claims/index.js';
+import { inferPermutationRule, parseClaim, type ClaimInput, type PermutationRule, type SizeClass } from '../claims/index.js';
 import type { ClaimPlanExt } from '../claims/plan-claim.js';
 import type { CounterexampleRecord } from '../store/index.js';
 import { candidateClaim, survivorClaim } from './candidate-claim.js';
@@ -8,7 +8,6 @@ import type { Candidate } from './candidate-space.js';
 import type { DiscoverInput } from './discover-input.js';
 import type { CandidateProgress } from './discover-store.js';
 import { groupSurvivors } from './group-survivors.js';
-import { inferPermutationRule, type PermutationRule } from './infer-substitution.js';
 
 /** The evidence behind a survivor. */
 export interface SurvivorEvidence {
@@ -76,11 +75,7 @@ function compareClasses(a: SizeClass, b: SizeClass): number {
 
 function ruleOf(c: Candidate, p: CandidateProgress, plan: ClaimPlanExt): PermutationRule | undefined {
   if (!c.polynomial) return undefined;
-  const rows = p.evidence.map((e) => {
-    const cls = plan.classForKey(e.classKey);
-    const n = Math.max(sizeOf(cls.lengths), sizeOf(c.map.map((s) => cls.lengths[s.from]!)));
-    return { variables: cls.variables, n, common: e.commonPermutations ?? [] };
-  });
+  const rows = p.evidence.map((e) => ({ variables: plan.classForKey(e.classKey).variables, common: e.commonPermutations ?? [] }));
   return inferPermutationRule(plan.compiled.variables.map((v) => v.name), rows);
 }
 

@@ -1,8 +1,7 @@
-import type { ClaimInput } from '../claims/index.js';
+import type { ClaimInput, PermutationRule } from '../claims/index.js';
 import { valueRing } from '../engine/index.js';
 import type { Candidate } from './candidate-space.js';
 import type { DiscoverInput } from './discover-input.js';
-import type { PermutationRule } from './infer-substitution.js';
 
 const kebab = (s: string) => s.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '');
 
@@ -36,13 +35,11 @@ export function survivorClaim(c: Candidate, input: DiscoverInput, rule: Permutat
   const claim = candidateClaim(c, input);
   if (!c.polynomial || rule === undefined) return claim;
   const base = `Found by discover: ${c.description} keeps the ${c.left.name} value${c.left === c.right ? '' : ` (the right side measured in ${c.right.name})`}`;
-  if (rule.type === 'identity') {
-    return { ...claim, id: `${claim.id}-equal`, statement: `${base}.`, compare: { ...claim.compare, relation: { type: 'equal' } } };
+  if (rule.relation.type === 'equal') {
+    return { ...claim, id: `${claim.id}-equal`, statement: `${base}.`, compare: { ...claim.compare, relation: rule.relation } };
   }
-  return {
-    ...claim,
-    id: `${claim.id}-substituted`,
-    statement: `${base}, after reversing y_(${rule.from})..y_(${rule.to}) on the right.`,
-    compare: { ...claim.compare, relation: { type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: rule.from, to: rule.to }] } },
-  };
+  const steps = rule.relation.substitution.map((s) =>
+    s.type === 'reverseBlock' ? `reversing y_(${s.from})..y_(${s.to})` : s.type === 'shiftBlock' ? `shifting y_(${s.from})..y_(${s.to}) cyclically by ${s.by}` : JSON.stringify(s),
+  );
+  return { ...claim, id: `${claim.id}-substituted`, statement: `${base}, after ${steps.join(' then ')} on the right.`, compare: { ...claim.compare, relation: { type: 'equalAfterSubstitution', substitution: [...rule.relation.substitution] } } };
 }

@@ -22,7 +22,7 @@ describe('discover on (a,0,b,a,0,b) in equivariant cohomology', () => {
 
   it('finds the exchange of sides 1 and 4 up to the reversal of y_(b+1)..y_(a+b), written as equalAfterSubstitution', () => {
     // Expected rule stated by issue 12's checks (value from memory there).
-    expect(exchange?.evidence.permutationRule).toEqual({ type: 'reverseBlock', from: 'b+1', to: 'a+b' });
+    expect(exchange?.evidence.permutationRule?.relation).toEqual({ type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 'b+1', to: 'a+b' }] });
     expect(exchange?.claim.transform).toEqual([{ type: 'exchange', sides: [1, 4] }]);
     expect(exchange?.claim.compare.relation).toEqual({ type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 'b+1', to: 'a+b' }] });
   });
