@@ -1,30 +1,18 @@
 /**
  * Single counts as a researcher runs them (issue 8): CLI start-up, one cohomology coefficient at n = 20
- * against the Python yardstick (whole processes), the sweep strategy per theory (work and CPU, one process
- * per case), and the scaling of single counts n = 12 … 30 in cohomology and K-theory with peak memory.
+ * against the Python yardstick, and the exact equivariant Gr(6,12) coefficient (whole processes).
+ * Strategy and scaling: count-scaling-benchmark.ts.
  */
-import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
+import { cli, countArgs, median, pythonArgs, sec } from './count-commands.js';
 import { timed, type TimedRun } from './timed-process.js';
 import { TRIPLES } from './yardstick-triples.js';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const root = join(here, '..', '..');
-const cli = join(root, 'dist', 'cli', 'main.js');
-const python = join(here, 'python-dp.py');
-
 type Run = TimedRun;
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
-const reverse = (s: string) => [...s].reverse().join('');
-const sec = (x: number) => (x >= 10 ? x.toFixed(1) : x.toFixed(2));
 const ms = (x: number) => `${Math.round(x * 1000)}`;
-
-const countArgs = (theory: string, [l, m, n]: [string, string, string]) => [process.execPath, cli, 'count', '--theory', theory, '--triangle', `${l},${m},${n}`, '--json'];
-const pythonArgs = (theory: string, [l, m, n]: [string, string, string]) => ['python3', python, 'count', theory, `${l},-,${m},-,${reverse(n)},-`];
 
 function startupSection(dir: string): string[] {
   const small = join(dir, 'small.sqlite');
@@ -77,103 +65,35 @@ function yardstickSection(): string[] {
   ];
 }
 
-interface Work {
-  strategy: string;
-  value?: string;
-  stopped?: { done: number; total: number; profiles: number };
-  cpuMs: number;
-  work: number;
-  widest: number;
-  peakMB: number;
-}
-
-function workCase(theory: string, strategy: string, triple: [string, string, string], limit = 600): Work {
-  const r = spawnSync(process.execPath, [join(here, 'count-work-case.mjs'), theory, strategy, ...triple, String(limit)], { encoding: 'utf8', cwd: root, maxBuffer: 1 << 24 });
-  return JSON.parse(r.stdout) as Work;
-}
-
-function strategySection(): string[] {
-  const eq12: [string, string, string] = ['010101010101', '010101010101', '101010101010'];
-  const cases: [string, number, [string, string, string]][] = [
-    ['cohomology', 20, TRIPLES[20]!],
-    ['cohomology', 24, TRIPLES[24]!],
-    ['equivariant', 12, eq12],
-    ['equivariant', 16, TRIPLES[16]!],
-    ['k-theory', 16, TRIPLES[16]!],
-    ['k-theory', 20, TRIPLES[20]!],
-    ['k-theory', 24, TRIPLES[24]!],
-    ['dual-k-theory', 16, TRIPLES[16]!],
-    ['dual-k-theory', 20, TRIPLES[20]!],
-    ['ssm-nonequivariant', 12, TRIPLES[12]!],
-    ['ssm-nonequivariant', 16, TRIPLES[16]!],
-    ['ssm-nonequivariant', 20, TRIPLES[20]!],
+// The issue's equivariant Gr(6,12) coefficient, exact: the answer within 2 GB, or a clean refusal.
+function equivariantSection(): string[] {
+  const triple: [string, string, string] = ['010101010101', '010101010101', '101010101010'];
+  const node = timed(countArgs('equivariant', triple), 900);
+  const py = timed(pythonArgs('equivariant', triple), 60);
+  const out = node.out ? (JSON.parse(node.out) as { puzzles?: string; value?: { terms?: unknown[] } }) : undefined;
+  const pyTerms = py.out ? (JSON.parse(py.out) as { terms: number }).terms : undefined;
+  const pyCell = (key: 'wall' | 'cpu') => (py.stopped ? `stopped at ${sec(py[key])}` : sec(py[key]));
+  return [
+    '### Equivariant Gr(6,12): λ = μ = 010101010101, ν = 101010101010, exact polynomial (whole processes)',
+    '',
+    '| | puzzles | terms | wall s | CPU s | peak MB |',
+    '|---|---:|---:|---:|---:|---:|',
+    `| \`puzzlesweep count\` | ${out?.puzzles ?? (node.stopped ? 'stopped at 900 s' : 'failed')} | ${out?.value?.terms?.length ?? ''} | ${sec(node.wall)} | ${sec(node.cpu)} | ${node.rssMB} |`,
+    `| python-dp.py (stopped after 60 s) | | ${pyTerms ?? ''} | ${pyCell('wall')} | ${pyCell('cpu')} | ${py.rssMB} |`,
+    '',
+    'Goal: an exact answer within 2 GB, or a clean, early, explained refusal.',
   ];
-  const lines = [
-    '### Sweep strategy per theory (one process per case)',
-    '',
-    'Work = profiles written: the new size of the frontier each step extended, summed over the steps (machine-independent; an earlier table',
-    'counted both frontiers at every step, which overstated meeting in the middle about twofold). Widest = live profiles of both frontiers at',
-    'the widest step. CPU includes Node start-up (about 60 ms). Integer values in cohomology and K-theories, residues mod one prime otherwise.',
-    '',
-    '| theory | n | backward work | meet work | meet / backward | backward widest | meet widest | backward CPU ms | meet CPU ms | default |',
-    '|---|---:|---:|---:|---:|---:|---:|---:|---:|---|',
-  ];
-  for (const [theory, n, triple] of cases) {
-    const b = workCase(theory, 'backward', triple);
-    const m = workCase(theory, 'meet', triple);
-    const d = spawnSync(process.execPath, ['-e', `import('./dist/engine/index.js').then((e) => console.log(e.defaultStrategy(e.theoryPieceSet('${theory}'))))`], { encoding: 'utf8', cwd: root }).stdout.trim();
-    lines.push(`| ${theory} | ${n} | ${b.work} | ${m.work} | ${(m.work / b.work).toFixed(2)} | ${b.widest} | ${m.widest} | ${b.cpuMs} | ${m.cpuMs} | ${d} |`);
-  }
-  return lines;
-}
-
-function scalingSection(): string[] {
-  const lines = [
-    '### Single counts n = 12 … 30: `puzzlesweep count` (whole process, default strategy) beside python-dp.py',
-    '',
-    'Python runs for n ≤ 24 only, stopped after 60 s; the K-theory count is stopped after 300 s. Work and widest come from',
-    'count-work-case.mjs (same strategy, one more process) and say what a count at that size must touch.',
-    '',
-    '| theory | n | value | count wall s | count CPU s | count peak MB | work (profiles written) | widest | Python CPU s | Python peak MB | CPU ratio |',
-    '|---|---:|---|---:|---:|---:|---:|---:|---:|---:|---:|',
-  ];
-  for (const theory of ['cohomology', 'k-theory']) {
-    for (const n of [12, 16, 20, 24, 28, 30]) {
-      const triple = TRIPLES[n]!;
-      const limit = theory === 'k-theory' ? 300 : 600;
-      const node = timed(countArgs(theory, triple), limit);
-      const w = workCase(theory, 'default', triple, limit);
-      const value = node.stopped ? `stopped at ${limit} s` : node.out ? String((JSON.parse(node.out) as { value: number | string }).value) : 'failed';
-      const workText = w.stopped ? `> ${w.work} (step ${w.stopped.done} of ${w.stopped.total} at ${limit} s)` : String(w.work);
-      let pyCpu = 'not run';
-      let pyMB = '';
-      let ratio = '';
-      if (n <= 24) {
-        const py = timed(pythonArgs(theory, triple), 60);
-        pyCpu = py.stopped ? `stopped at ${sec(py.cpu)}` : sec(py.cpu);
-        pyMB = String(py.rssMB);
-        ratio = `${py.stopped ? '> ' : ''}${(py.cpu / Math.max(node.cpu, 0.01)).toFixed(1)}×`;
-      }
-      lines.push(`| ${theory} | ${n} | ${value} | ${sec(node.wall)} | ${sec(node.cpu)} | ${node.rssMB} | ${workText} | ${w.widest} | ${pyCpu} | ${pyMB} | ${ratio} |`);
-    }
-  }
-  return lines;
 }
 
 export default async function singleCountBenchmark(): Promise<string> {
   const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-single-'));
   try {
-    const only = (process.env.SINGLE_COUNT_PARTS ?? 'startup,yardstick,strategy,scaling').split(',');
     const load = loadavg()[0]!.toFixed(1);
-    const parts: string[][] = [];
-    if (only.includes('startup')) parts.push(startupSection(dir));
-    if (only.includes('yardstick')) parts.push(yardstickSection());
-    if (only.includes('strategy')) parts.push(strategySection());
-    if (only.includes('scaling')) parts.push(scalingSection());
+    const parts = [startupSection(dir), yardstickSection(), equivariantSection()];
     return [
-      '## Single counts: start-up, strategy per theory, scaling (test/bench/single-count-benchmark.ts)',
+      '## Single counts: start-up, the n = 20 coefficient, equivariant Gr(6,12) (test/bench/single-count-benchmark.ts)',
       '',
-      `Load average when this section started: ${load} on 2 cores shared with other work; CPU times are the numbers to read.`,
+      `Load average when this section started: ${load} on 2 cores; CPU times are the numbers to read.`,
       '',
       ...parts.flatMap((p) => [...p, '']),
     ].join('\n').trimEnd();
