@@ -50,3 +50,26 @@ export function solveAtFixedPoints<R, V>(s: FixedPointSolve<R, V>, only?: readon
   });
   return table;
 }
+
+/** A value ring whose classes restrict into the ring itself and whose last step is an exact division. */
+interface ExactRing<V> {
+  mul(other: V): V;
+  sub(other: V): V;
+  isZero(): boolean;
+  divExact(other: V): V;
+}
+
+/** The solve when c^w = (what is left at w) / [X_w]|_w exactly, as in cohomology and K-theory. */
+export function solveByExactDivision<V extends ExactRing<V>>(strings: readonly string[], at: (lam: string, w: string) => V | undefined, only?: readonly [string, string]): Map<string, V> {
+  return solveAtFixedPoints<V, V>(
+    {
+      strings,
+      at,
+      product: (lw, mw) => lw.mul(mw),
+      subtract: (rem, c, nw) => rem.sub(c.mul(nw)),
+      isZero: (v) => v.isZero(),
+      solve: (rem, w) => rem.divExact(at(w, w)!),
+    },
+    only,
+  );
+}

@@ -1,5 +1,5 @@
 import { checkGrassmannian, grassmannianStrings, inv } from './grassmannian-strings.js';
-import { solveAtFixedPoints } from './fixed-point-solve.js';
+import { solveByExactDivision } from './fixed-point-solve.js';
 import { RefLaurent } from './ref-laurent.js';
 
 // Equivariant K-theory of Gr(k, n): K_T(pt) = ℤ[t_1^{±1}, …, t_n^{±1}], t_p = e^{y_p} (t_p has variable
@@ -79,16 +79,5 @@ export function kRestrictionTable(k: number, n: number): Map<string, Map<string,
 /** With `only`, just the products of that one pair (λ, μ). */
 export function kLocalizationTable(k: number, n: number, only?: readonly [string, string]): Map<string, RefLaurent> {
   const res = kRestrictionTable(k, n);
-  const at = (lam: string, w: string): RefLaurent | undefined => res.get(lam)!.get(w);
-  return solveAtFixedPoints<RefLaurent, RefLaurent>(
-    {
-      strings: grassmannianStrings(k, n),
-      at,
-      product: (lw, mw) => lw.mul(mw),
-      subtract: (rem, c, nw) => rem.sub(c.mul(nw)),
-      isZero: (v) => v.isZero(),
-      solve: (rem, w) => rem.divExact(at(w, w)!),
-    },
-    only,
-  );
+  return solveByExactDivision(grassmannianStrings(k, n), (lam, w) => res.get(lam)!.get(w), only);
 }

@@ -1,5 +1,5 @@
 import { checkGrassmannian, checkString, grassmannianStrings, inv } from './grassmannian-strings.js';
-import { solveAtFixedPoints } from './fixed-point-solve.js';
+import { solveByExactDivision } from './fixed-point-solve.js';
 import { RefPolynomial } from './ref-polynomial.js';
 
 // Conventions: the simple reflection s_i (1 ≤ i < n) swaps positions i, i+1 of a string and variables
@@ -105,14 +105,6 @@ export function restrictionTable(k: number, n: number): Map<string, Map<string, 
  */
 export function localizationTable(k: number, n: number): Map<string, RefPolynomial> {
   const res = restrictionTable(k, n);
-  const at = (lam: string, w: string): RefPolynomial | undefined => res.get(lam)!.get(w);
-  return solveAtFixedPoints<RefPolynomial, RefPolynomial>({
-    strings: grassmannianStrings(k, n),
-    at,
-    product: (lw, mw) => lw.mul(mw),
-    subtract: (rem, c, nw) => rem.sub(c.mul(nw)),
-    isZero: (v) => v.isZero(),
-    solve: (rem, w) => rem.divExact(at(w, w)!),
-  });
+  return solveByExactDivision(grassmannianStrings(k, n), (lam, w) => res.get(lam)!.get(w));
 }
 
