@@ -50,6 +50,12 @@ const PART_PATIENCE_MS = 10_000;
 // Entries per part of a shared table, at least.
 const PART_ENTRIES = 40_000;
 
+/** Cell keys a chunk will still need, `next` … `last` in key order (advanced as cells are found claimed). */
+export interface Ahead {
+  next: number;
+  readonly last: number;
+}
+
 /** A cell's left table: its values by table index and the stride of each side's digit. */
 export interface LeftTable {
   readonly values: Float64Array;
@@ -91,13 +97,19 @@ export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, 
     });
   }
 
-  // A cell's left table in shared memory: its parts (slices of the most significant side with several
-  // candidates) are claimed one by one, so workers needing the same cell split its work; then wait for the rest.
-  function sharedLeftTable(cls: SizeClass, layout: Layout, contents: readonly number[], view: SharedView, key: number): LeftTable | undefined {
+  // A cell's left table in shared memory, cut into parts (slices of a side the top-down sweep reads first)
+  // that workers claim one at a time with compareExchange, so each part is computed once by whoever comes first.
+  interface Parts {
+    readonly values: Float64Array;
+    readonly counts: number[];
+    readonly parts: number;
+    compute(p: number): boolean;
+  }
+  function partsOf(cls: SizeClass, layout: Layout, contents: readonly number[], view: SharedView, key: number): Parts | undefined {
     const candidates = candidatesOf(layout, contents);
     const counts = candidates.map((l) => l.length);
     const size = view.shape.sizes[key]!;
-    if (counts.reduce((p, n) => p * n, 1) !== size) return undefined;
+    if (size === 0 || counts.reduce((p, n) => p * n, 1) !== size) return undefined;
     const values = view.values.subarray(view.shape.offsets[key]!, view.shape.offsets[key]! + size);
     // Cut along a side the top-down sweep reads first (sides 2 and 3 start at the top), so that the parts
     // share no steps; a part of the table is then a strided set of blocks.
@@ -123,26 +135,66 @@ export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, 
         for (let o = 0; o < outer; o++) values.set(t.subarray(o * block, o * block + block), (o * n + lo) * inner);
         return true;
       }) === true;
-    const base = key * TABLE_PARTS;
-    for (let p = 0; p < parts; p++) {
-      if (Atomics.compareExchange(view.state, base + p, 0, 1) !== 0) continue;
-      Atomics.store(view.state, base + p, compute(p) ? 2 : 3);
-      Atomics.notify(view.state, base + p);
+    return { values, counts, parts, compute };
+  }
+
+  // Computes part p of a cell unless another worker claimed it first; true when this worker computed it.
+  function claimPart(view: SharedView, key: number, p: number, parts: Parts): boolean {
+    const slot = key * TABLE_PARTS + p;
+    if (Atomics.compareExchange(view.state, slot, 0, 1) !== 0) return false;
+    Atomics.store(view.state, slot, parts.compute(p) ? 2 : 3);
+    Atomics.notify(view.state, slot);
+    return true;
+  }
+
+  // Instead of waiting for a part another worker computes, compute an unclaimed part of a cell in `ahead`
+  // (cell keys the current chunk will need, in the order it needs them): a full sweep needs every cell once,
+  // so this is work taken off the others, never work done twice. False when nothing is left to claim.
+  function helpAhead(cls: SizeClass, layout: Layout, view: SharedView, ahead: Ahead): boolean {
+    const radix = layout.groups.map((g) => g.contents.length);
+    for (; ahead.next <= ahead.last; ahead.next++) {
+      const key = ahead.next;
+      const base = key * TABLE_PARTS;
+      // Cheap test first: every part slot of the cell already claimed (or the cell is empty).
+      let open = false;
+      for (let p = 0; p < TABLE_PARTS && !open; p++) open = Atomics.load(view.state, base + p) === 0;
+      if (!open || view.shape.sizes[key] === 0) continue;
+      const contents = new Array<number>(radix.length);
+      let rest = key;
+      for (let g = radix.length - 1; g >= 0; g--) {
+        contents[g] = rest % radix[g]!;
+        rest = (rest - contents[g]!) / radix[g]!;
+      }
+      const parts = partsOf(cls, layout, contents, view, key);
+      if (!parts) continue;
+      for (let p = 0; p < parts.parts; p++) if (claimPart(view, key, p, parts)) return true;
     }
-    for (let p = 0; p < parts; p++) {
-      const began = Date.now();
+    return false;
+  }
+
+  function sharedLeftTable(cls: SizeClass, layout: Layout, contents: readonly number[], view: SharedView, key: number, ahead?: Ahead): LeftTable | undefined {
+    const parts = partsOf(cls, layout, contents, view, key);
+    if (!parts) return undefined;
+    const base = key * TABLE_PARTS;
+    for (let p = 0; p < parts.parts; p++) claimPart(view, key, p, parts);
+    for (let p = 0; p < parts.parts; p++) {
+      // Only time spent waiting counts against the other worker (not time spent helping ahead).
+      let waited = 0;
       while (Atomics.load(view.state, base + p) === 1) {
-        if (Date.now() - began > PART_PATIENCE_MS) {
+        if (ahead && helpAhead(cls, layout, view, ahead)) continue;
+        if (waited > PART_PATIENCE_MS) {
           // Its worker is gone or stuck: the values are the same whoever writes them.
-          Atomics.store(view.state, base + p, compute(p) ? 2 : 3);
+          Atomics.store(view.state, base + p, parts.compute(p) ? 2 : 3);
           Atomics.notify(view.state, base + p);
           break;
         }
+        const began = Date.now();
         Atomics.wait(view.state, base + p, 1, 50);
+        waited += Date.now() - began;
       }
       if (Atomics.load(view.state, base + p) !== 2) return undefined;
     }
-    return { values, stride: strides(counts) };
+    return { values: parts.values, stride: strides(parts.counts) };
   }
 
   function buildCell(cls: SizeClass, layout: Layout, contents: readonly number[], leftOf: (c: readonly number[]) => LeftTable | undefined): Cell {
@@ -239,7 +291,7 @@ export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, 
     return { contents, rankMap };
   }
 
-  return { leftTable, sharedLeftTable, buildCell };
+  return { leftTable, sharedLeftTable, helpAhead, buildCell };
 }
 
 // Strides of a family table's index (FAMILY_SIDE_ORDER: side 5 least significant), per side.

@@ -1,7 +1,7 @@
 import { fillingCountSemiring, integerSemiring, type SafeInt, type Semiring } from '../engine/index.js';
 import type { ScanTally, SharedTables, SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
-import { familyCells, NOT_TABULATED, type Cell, type InnerSums, type LeftTable, type SharedView } from './family-cells.js';
+import { familyCells, NOT_TABULATED, type Ahead, type Cell, type InnerSums, type LeftTable, type SharedView } from './family-cells.js';
 import type { ClaimPlanExt } from './plan-claim.js';
 import { TABLE_PARTS, tableShape } from './shared-tables.js';
 
@@ -80,10 +80,13 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       offsets: [...g.contents.map((c) => Number(c.offset)), Number(g.size)],
       strings: g.contents.map((c) => Number(c.strings)),
     }));
+    // The cells this chunk meets lie between those of its first and last outer digits (key order = index order
+    // of the outer groups): a worker that would wait for another's part computes one of these instead.
+    const ahead: Ahead | undefined = shared ? { next: outerKeyAt(groups, Number(start) / groups[groups.length - 1]!.size) * groups[groups.length - 1]!.strings.length, last: (outerKeyAt(groups, (Number(end) - 1) / groups[groups.length - 1]!.size) + 1) * groups[groups.length - 1]!.strings.length - 1 } : undefined;
     const leftOf = (contents: readonly number[]) => {
       const key = `${shared ? `${tables!.id}|` : ''}${cls.key}|${contents.join(',')}`;
       if (!lefts.has(key)) {
-        const t = shared ? sharedLeftTable(cls, layout, contents, shared, cellKeyOf(contents)) : leftTable(cls, layout, contents);
+        const t = shared ? sharedLeftTable(cls, layout, contents, shared, cellKeyOf(contents), ahead) : leftTable(cls, layout, contents);
         remember(shared ? 0 : (t?.values.length ?? 0));
         lefts.set(key, t);
       }
@@ -269,4 +272,29 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
   };
 
   return { scan };
+}
+
+interface GroupDigits {
+  readonly sides: readonly number[];
+  readonly single: boolean;
+  readonly size: number;
+  readonly offsets: readonly number[];
+  readonly strings: readonly number[];
+}
+
+// The cell key of the outer groups (all but the last) at outer index q: mixed radix of their content indices.
+function outerKeyAt(groups: readonly GroupDigits[], q: number): number {
+  let rest = Math.floor(q);
+  let key = 0;
+  let scale = 1;
+  for (let g = groups.length - 2; g >= 0; g--) {
+    const G = groups[g]!;
+    let x = rest % G.size;
+    rest = (rest - x) / G.size;
+    let c = 0;
+    if (!G.single) while (x >= G.offsets[c + 1]!) c++;
+    key += c * scale;
+    scale *= G.strings.length;
+  }
+  return key;
 }
