@@ -7,6 +7,8 @@ import type { WorkerReply, WorkerTask } from './worker-task.js';
 
 /** How often a task is tried before the run gives up with `worker_crashed`. */
 export const MAX_ATTEMPTS = 3;
+/** Tasks queued per worker thread at once (src/run/sweep-worker.ts runs them one after another). */
+export const TASKS_PER_THREAD = 2;
 
 // The worker always runs compiled JavaScript: under vitest this module is a .ts source in src/, so point at dist/.
 // The build's one-file bundle of the worker (src/build/bundle-worker.mjs) starts faster than ~60 modules.
@@ -32,9 +34,13 @@ export class WorkerPool implements TaskRunner {
   private readonly pool: Piscina<WorkerTask, WorkerReply>;
   /** Crashes seen so far (each one retried or reported). */
   crashes = 0;
+  // A dead thread fails every task queued on it with one error: one crash, however many tasks it held.
+  private readonly seen = new WeakSet<object>();
 
   constructor(readonly size: number) {
-    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, idleTimeout: 60_000, resourceLimits: { maxYoungGenerationSizeMb: 16 } });
+    // Two tasks per thread: the next chunk already waits in the thread's own queue when one finishes, so the
+    // thread never idles until the main thread (busy storing, or descheduled on a loaded machine) hands it one.
+    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, concurrentTasksPerWorker: TASKS_PER_THREAD, idleTimeout: 60_000, resourceLimits: { maxYoungGenerationSizeMb: 16 } });
   }
 
   /** Runs one task; a dead worker means another try on a fresh one, up to MAX_ATTEMPTS. */
@@ -45,7 +51,8 @@ export class WorkerPool implements TaskRunner {
         return await this.pool.run({ ...task, attempt });
       } catch (e) {
         last = e;
-        this.crashes++;
+        if (typeof e !== 'object' || e === null || !this.seen.has(e)) this.crashes++;
+        if (typeof e === 'object' && e !== null) this.seen.add(e);
       }
     }
     throw new CodedError('worker_crashed', { what: 'Worker', expected: `${what} to finish`, received: `${MAX_ATTEMPTS} crashed attempts (${(last as Error)?.message ?? String(last)})` }, {
