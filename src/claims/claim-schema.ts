@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { BUILTIN_THEORIES } from '../engine/index.js';
 import { formulaSchema } from './formula/formula-schema.js';
 import { measureSchema } from './measures/measure-registry.js';

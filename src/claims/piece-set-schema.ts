@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { migrateLegacyPieces } from './legacy-pieces.js';
 
 const label = z.string().min(1, 'Label: expected a nonempty string');

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { EXPRESSION_PATTERN } from './affine.js';
 
 const EXPRESSION_ERROR = "Expression: expected an integer, a variable name or a sum such as 'a+b', 'n-1' or '2*a+1'";

@@ -1,5 +1,5 @@
 import { basename } from 'node:path';
-import { z } from 'zod';
+import * as z from 'zod';
 import { parseClaim, type Claim, type TheoryInput } from '../claims/index.js';
 import { readJsonFile } from '../claims/resolve-theory.js';
 import { fromZodError, parseMarked } from '../claims/zod-issue.js';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { CodedError } from '../errors/index.js';
 import { hasSchemaMessage, issueExpected, parseMarked, schemaMessageParts } from '../claims/zod-issue.js';
 import { DEFAULT_STORE_PATH } from '../store/index.js';

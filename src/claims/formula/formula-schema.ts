@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { EXPRESSION_PATTERN } from '../affine.js';
 
 const expression = z

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { hasIntegerWeights } from '../resolve-theory.js';
 import { defineMeasure } from './measure-def.js';
 

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { addAffine, evalAffine } from '../affine.js';
 import { equalValues } from '../compare-values.js';
 import { substitutionStepDef, substitutionStepSchema } from '../substitutions/substitution-registry.js';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { equalValues } from '../compare-values.js';
 import { defineRelation } from './relation-def.js';
 

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { evalAffine, valuesText, addAffine } from '../affine.js';
 import { equalValues } from '../compare-values.js';
 import { needPolynomialMeasure } from './relation-checks.js';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { integers } from './integer-order.js';
 import { needIntegerMeasure } from './relation-checks.js';
 import { defineRelation } from './relation-def.js';

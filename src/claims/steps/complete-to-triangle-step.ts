@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { completeToTriangle, makeRegion } from '../../engine/index.js';
 import { addAffine, constantAffine } from '../affine.js';
 import { defineStep } from './transform-step-def.js';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { evalAffine, valuesText } from '../affine.js';
 import { permutedSides } from '../side-map.js';
 import { sideSchema } from '../schema-parts.js';

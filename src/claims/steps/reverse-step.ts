@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { chosenSides, IDENTITY_MAP } from '../side-map.js';
 import { sideListSchema } from '../schema-parts.js';
 import { defineStep } from './transform-step-def.js';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { permutedSides } from '../side-map.js';
 import { defineStep } from './transform-step-def.js';
 

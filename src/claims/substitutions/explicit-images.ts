@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { valuesText } from '../affine.js';
 import { defineSubstitutionStep } from './substitution-step-def.js';
 

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { evalAffine, parseAffine, type Affine } from '../affine.js';
 import { expressionSchema, expressionVariables } from '../schema-parts.js';
 import { checkBlock } from './block-check.js';
