@@ -22,6 +22,16 @@ export interface SweepInput {
   readonly onProgress?: ((p: SweepProgress) => void) | undefined;
   /** File URL of a claim runtime module; the compiled claims runtime when absent. */
   readonly runtimeModule?: string | undefined;
+  /** Threads the caller started already (`startWorkers`, before compiling the claims); runSweep destroys them. */
+  readonly pool?: TaskRunner | undefined;
+}
+
+/**
+ * Worker threads asked for by number, started at once so that their start-up (a thread, the worker's
+ * bundle, its modules) overlaps the claims' compilation, the planning and the store's opening.
+ */
+export function startWorkers(options: { readonly workers?: number | undefined }): TaskRunner | undefined {
+  return options.workers ? new WorkerPool(options.workers) : undefined;
 }
 
 /** 130 interrupted, 1 a counterexample is known, 4 anything requested left unfinished (or nothing to check), else 0. */
@@ -35,8 +45,7 @@ export function sweepExitCode(claims: readonly ClaimSummary[], interrupted: bool
 /** Sweeps each claim in turn on one worker pool and one store; returns data, prints nothing. */
 export async function runSweep(input: SweepInput): Promise<SweepSummary> {
   const began = Date.now();
-  // Worker threads asked for by number start at once: their start-up overlaps the planning and the store's opening.
-  let pool: TaskRunner | undefined = input.options.workers ? new WorkerPool(input.options.workers) : undefined;
+  let pool: TaskRunner | undefined = input.pool ?? startWorkers(input.options);
   try {
     return await sweepAll(input, began, (threads) => (pool ??= threads === 0 ? new InProcessRunner() : new WorkerPool(threads)));
   } finally {

@@ -2,7 +2,7 @@ import { availableParallelism } from 'node:os';
 import type { CommandModule } from 'yargs';
 import { loadSweepClaim } from '../../run/load-sweep-claim.js';
 import { parseRunOptions } from '../../run/run-options.js';
-import { runSweep } from '../../run/run-sweep.js';
+import { runSweep, startWorkers } from '../../run/run-sweep.js';
 import { DEFAULT_STORE_PATH } from '../../store/index.js';
 import { runCommand } from '../run-command.js';
 import { sweepProgressBar } from '../sweep-progress-bar.js';
@@ -78,12 +78,20 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
       if ((options.workers ?? 0) > cores) {
         process.stderr.write(`⚠ --workers ${options.workers} is above this machine's ${cores} cores: the extra threads share cores and slow each other down (the default is ${cores})\n`);
       }
-      // Every claim is validated before the store is opened, so bad input never touches it.
-      const claims = args.claims.map((file) => loadSweepClaim(file));
+      // Threads asked for by number start before the claims compile; runSweep destroys them.
+      const pool = startWorkers(options);
+      let claims;
+      try {
+        // Every claim is validated before the store is opened, so bad input never touches it.
+        claims = args.claims.map((file) => loadSweepClaim(file));
+      } catch (e) {
+        await pool?.destroy();
+        throw e;
+      }
       const bar = sweepProgressBar(!options.json);
       const interrupt = interruptSignal();
       try {
-        const summary = await runSweep({ claims, options, signal: interrupt.signal, onProgress: bar.onProgress });
+        const summary = await runSweep({ claims, options, pool, signal: interrupt.signal, onProgress: bar.onProgress });
         bar.stop();
         process.stdout.write(`${options.json ? summaryJson({ formatVersion: JSON_FORMAT_VERSION, ...summary }) : sweepSummaryText(summary)}\n`);
         return summary.exitCode;
