@@ -11,6 +11,7 @@ import {
   integerSemiring,
   makeRegion,
   modularSemiring,
+  residueNormSemiring,
   polynomialSemiring,
   substitutePoly,
   statisticWeigher,
@@ -22,6 +23,7 @@ import {
   type PieceSet,
   type Polynomial,
   type Residues,
+  type ResidueNormSemiring,
   type SafeInt,
   type Semiring,
 } from '../engine/index.js';
@@ -64,19 +66,11 @@ export function substituteValue(v: Value, sigma: Permutation): Value {
   return v;
 }
 
-const abs = (n: number) => (n < 0 ? -n : n);
-
-// Every weight replaced by the 1-norm of its polynomial: the count bounds the 1-norm of the value.
-const normSemiring: Semiring<SafeInt> = {
-  ...integerSemiring,
-  name: 'norm',
-  fromInteger: (n) => abs(n),
-  variable: () => 1,
-  position: () => 2,
-  strip: () => 1,
-  // Used for Laurent weights only, whose divisors are ± monomials of 1-norm 1.
-  divide: (a) => a,
-};
+// No coefficient bound at all: past the product of the primes, so `modularErrorBound` claims nothing.
+const NO_BOUND = 1n << 256n;
+function normOf(lane: number): SafeInt {
+  return Number.isSafeInteger(lane) ? lane : NO_BOUND;
+}
 
 // The largest total degree of a piece weight, so a value's degree is at most this times the triangle count.
 function weightDegree(pieces: PieceSet): number {
@@ -98,7 +92,7 @@ function sameButSide5(la: readonly number[], lb: readonly number[], sa: readonly
 /** Measures boundaries in one theory, caching one sweep per boundary with side 5 left open. */
 export class Meter {
   private readonly cache: LruCache<string, Map<string, unknown>>;
-  private readonly modular = new Map<string, Semiring<Residues>>();
+  private readonly modular = new Map<string, ResidueNormSemiring>();
   /** The last sweep used per tag (value, norm, …), for runs of instances that differ only in side 5. */
   private readonly last = new Map<string, { lengths: readonly number[]; sides: readonly string[]; map: Map<string, unknown> }>();
   readonly polynomial: boolean;
@@ -158,25 +152,22 @@ export class Meter {
       const key = `${attempt}|${sigma ? sigma.join(',') : ''}`;
       let semiring = this.modular.get(key);
       if (!semiring) {
-        semiring = modularSemiring(MODULAR_SEED + attempt, DEFAULT_PRIMES, sigma ? (i) => sigma[i - 1] ?? i : undefined);
+        const point = modularSemiring(MODULAR_SEED + attempt, DEFAULT_PRIMES, sigma ? (i) => sigma[i - 1] ?? i : undefined);
         // Draw the named variables' points in one order, so both sides of a comparison share them.
-        for (const name of this.names) semiring.variable(name);
+        for (const name of this.names) point.variable(name);
+        // The residues and the 1-norm bound come from one sweep (the norm is a bound lane beside them).
+        semiring = residueNormSemiring(point);
         this.modular.set(key, semiring);
       }
       const ring = semiring;
       const map = this.completions(`mod:${key}`, lengths, sides, () => ({ semiring: ring }), (v) => v, useCache);
-      const v = (map.get(side5) as Residues | undefined) ?? ring.zero;
-      const triangles = unitTriangleCount(makeRegion(lengths));
-      if (this.fraction && !this.span) return { kind: 'mod', v, norm: 0, degree: 0, unbounded: true };
-      const norms = this.completions('norm', lengths, sides, () => ({ semiring: normSemiring }), (v) => v, useCache);
-      const norm = (norms.get(side5) as SafeInt | undefined) ?? 0;
-      if (this.span) {
-        // t^a·v is a polynomial for a_k ≤ T·negative per variable, of degree ≤ T·high + Σ a_k; the variables
-        // themselves are denominators that must not vanish (+ their number), see modularErrorBound.
-        const variables = makeRegion(lengths).size + this.names.length;
-        return { kind: 'mod', v, norm, degree: triangles * Math.max(this.span.high, 0) + variables * (triangles * this.span.negative + 1), laurent: true };
-      }
-      return { kind: 'mod', v, norm, degree: triangles * weightDegree(this.pieces) };
+      const lanes = (map.get(side5) as Residues | undefined) ?? ring.zero;
+      const primes = DEFAULT_PRIMES.length;
+      const v = lanes.slice(0, primes);
+      const degree = this.modularDegree(lengths);
+      if (!degree) return { kind: 'mod', v, norm: 0, degree: 0, unbounded: true };
+      // A bound lane past the safe integers is no longer exact: then no coefficient bound is claimed (bound 1).
+      return { kind: 'mod', v, norm: normOf(lanes[primes]!), ...degree };
     }
     if (this.fraction) {
       let f = (this.fractions(lengths, sides, useCache).get(side5) as Fraction | undefined) ?? fractionSemiring(0).zero;
@@ -187,6 +178,23 @@ export class Meter {
     let p = (map.get(side5) as Polynomial | undefined) ?? new Map<string, bigint>();
     if (sigma) p = substitutePoly(p, (k) => (k < sigma.length ? sigma[k]! - 1 : k));
     return { kind: 'poly', v: p };
+  }
+
+  /**
+   * The degree bound of a modular value on a region of these side lengths (with `laurent`, of t^a·v for
+   * the shift a clearing its denominators: compare two by the sum of their degrees); undefined for
+   * quotients with no bound (a modular "holds" on them proves nothing).
+   */
+  modularDegree(lengths: readonly number[]): { degree: number; laurent?: true } | undefined {
+    const triangles = unitTriangleCount(makeRegion(lengths));
+    if (this.fraction && !this.span) return undefined;
+    if (this.span) {
+      // t^a·v is a polynomial for a_k ≤ T·negative per variable, of degree ≤ T·high + Σ a_k; the variables
+      // themselves are denominators that must not vanish (+ their number), see modularErrorBound.
+      const variables = makeRegion(lengths).size + this.names.length;
+      return { degree: triangles * Math.max(this.span.high, 0) + variables * (triangles * this.span.negative + 1), laurent: true };
+    }
+    return { degree: triangles * weightDegree(this.pieces) };
   }
 
   private polynomials(lengths: readonly number[], sides: readonly string[], useCache: boolean): Map<string, unknown> {

@@ -59,7 +59,8 @@ function buildLanes(plan: KernelPlan, rings: readonly { semiring: Semiring<unkno
   const modular = forms.filter((f) => f!.kind === 'modular');
   if (modular.length > 0 && rings.length > 1) return null;
   const moduli = modular.length === 1 && modular[0]!.kind === 'modular' ? modular[0]!.moduli : null;
-  if (moduli && moduli.some((m) => !Number.isInteger(m) || m <= 1 || m >= MODULUS_LIMIT)) return null;
+  // A modulus 0 is a bound lane (numeric-kernel.ts).
+  if (moduli && moduli.some((m) => m !== 0 && (!Number.isInteger(m) || m <= 1 || m >= MODULUS_LIMIT))) return null;
   const L = moduli ? moduli.length : rings.length;
   const P = plan.pieceCount;
   const weights = new Float64Array(plan.stepCount * P * L);
@@ -72,7 +73,11 @@ function buildLanes(plan: KernelPlan, rings: readonly { semiring: Semiring<unkno
       const at = (s * P + k) * L;
       if (moduli) {
         const w = rings[0]!.weigher(p, t) as readonly number[];
-        for (let l = 0; l < L; l++) weights[at + l] = w[l]!;
+        for (let l = 0; l < L; l++) {
+          // a bound lane's weights must be nonnegative numbers (its rounding argument needs it)
+          if (moduli[l] === 0 && !(w[l]! >= 0)) return null;
+          weights[at + l] = w[l]!;
+        }
       } else {
         for (let l = 0; l < L; l++) {
           const w = rings[l]!.weigher(p, t);

@@ -3,7 +3,7 @@ import { genericWeights, numericLanes } from './count-kernel.js';
 
 import { genericStep } from './generic-sweep.js';
 import { BOTTOM_OPEN, kernelPlan, STEP_END, STEP_START, type KernelPlan } from './kernel-plan.js';
-import { forwardStep, newTable, NumericOverflow, type Lanes } from './numeric-kernel.js';
+import { forwardStep, newTable, NumericOverflow, residueLanes, type Lanes } from './numeric-kernel.js';
 import type { PieceSet } from './piece-set.js';
 import type { ProfileTable } from './profile-table.js';
 import type { Region } from './region.js';
@@ -26,8 +26,8 @@ export interface FamilyTable<T> {
   readonly size: number;
   /** Integer semirings whose values all stay safe integers: the values, by index (no objects). */
   readonly numbers: Float64Array | null;
-  /** The modular semiring: residues, `lanes` per entry. */
-  readonly residues: Uint32Array | null;
+  /** The modular semiring: residues, `lanes` per entry (float64 when a bound lane rides along, numeric-kernel.ts). */
+  readonly residues: Uint32Array | Float64Array | null;
   readonly lanes: number;
   /** The value of one entry, as the semiring's value (allocates for residues; fine off the hot path). */
   value(index: number): T;
@@ -215,10 +215,10 @@ export function countFamily<T>(region: Region, candidates: readonly (readonly st
   const locate = familyIndex(candidates);
   if (lanes) {
     const L = lanes.count;
-    const out = lanes.moduli ? new Uint32Array(size * L) : new Float64Array(size);
+    const out = residueLanes(lanes) ? new Uint32Array(size * L) : new Float64Array(size * L);
     try {
       walkFamily(plan, candidates, numericTables(plan, lanes, out), size);
-      const residues = lanes.moduli ? (out as Uint32Array) : null;
+      const residues = lanes.moduli ? out : null;
       const numbers = lanes.moduli ? null : (out as Float64Array);
       return {
         counts,

@@ -10,6 +10,7 @@ export * from './semirings/integer-semiring.js';
 export * from './semirings/polynomial.js';
 export * from './semirings/polynomial-semiring.js';
 export * from './semirings/modular-semiring.js';
+export * from './semirings/residue-norm-semiring.js';
 export * from './semirings/fraction-semiring.js';
 export * from './semirings/point-semiring.js';
 export * from './weight-formula.js';

@@ -5,11 +5,14 @@ import { ProfileTable } from './profile-table.js';
  * Value lanes of the numeric kernel. Integer lanes hold safe integers in float64 and raise
  * `NumericOverflow` the moment a product or sum would leave ±(2^53 − 1), so the caller can redo the
  * count in bigint (an integer never overflows silently). Modular lanes hold uint32 residues, one
- * modulus per lane (moduli below 2^26, so a product of two residues is exact in a double).
+ * modulus per lane (moduli below 2^26, so a product of two residues is exact in a double). Beside
+ * residues, a modulus 0 marks a *bound lane*: nonnegative values in float64, multiplied and added as
+ * they are, never raising. Such a lane is only ever compared with a bound far below 2^53, and rounding
+ * a nonnegative sum or product is monotone, so a value past 2^53 is still read as past the bound.
  */
 export interface Lanes {
   readonly count: number;
-  /** One modulus per lane, or null for integer lanes. */
+  /** One modulus per lane (0: a bound lane), or null for integer lanes. */
   readonly moduli: Float64Array | null;
   /** Weight of piece k on the triangle of step s in lane l at [(s·P + k)·lanes + l]. */
   readonly weights: Float64Array;
@@ -24,8 +27,13 @@ export class NumericOverflow extends Error {
 
 const MAX = Number.MAX_SAFE_INTEGER;
 
+/** Every lane a residue (stored as uint32); a bound lane or integer lanes need float64. */
+export function residueLanes(lanes: Lanes): boolean {
+  return lanes.moduli !== null && lanes.moduli.every((m) => m > 0);
+}
+
 export function newTable(lanes: Lanes, capacity = 16): ProfileTable {
-  return new ProfileTable(lanes.count, lanes.moduli !== null, capacity);
+  return new ProfileTable(lanes.count, residueLanes(lanes), capacity);
 }
 
 // Adds v·w (lane by lane) into entry `to` of `next`; `wb` indexes the weight row (−1: weight 1).
@@ -39,6 +47,10 @@ function accumulate(cv: Float64Array | Uint32Array, from: number, next: ProfileT
     if (wb >= 0) v *= w[wb + l]!;
     if (mod !== null) {
       const m = mod[l]!;
+      if (m === 0) {
+        nv[to + l] = nv[to + l]! + v;
+        continue;
+      }
       let r = v - Math.floor(v / m) * m;
       if (r < 0) r += m;
       let t = nv[to + l]! + r;
@@ -181,6 +193,10 @@ export function meetTables(f: ProfileTable, b: ProfileTable, lanes: Lanes): numb
       if (mod !== null) {
         const m = mod[l]!;
         const v = x * y;
+        if (m === 0) {
+          out[l] = out[l]! + v;
+          continue;
+        }
         let r = v - Math.floor(v / m) * m;
         if (r < 0) r += m;
         r += out[l]!;

@@ -34,5 +34,8 @@ export interface Semiring<T> {
   terms?(a: T): number;
 }
 
-/** Numeric representation of a semiring's values (see `Semiring.numeric`). */
+/**
+ * Numeric representation of a semiring's values (see `Semiring.numeric`). A modulus 0 among the
+ * moduli is a bound lane: a nonnegative float64 (an upper bound such as a 1-norm; numeric-kernel.ts).
+ */
 export type NumericForm = { readonly kind: 'integer' } | { readonly kind: 'modular'; readonly moduli: readonly number[] };
