@@ -92,6 +92,9 @@ export interface ScanTally {
   paired: number;
   vacuous: number;
   nonzero: number;
+  /** Modular decisions: the sum of their error bounds, and exact = false once there is one. */
+  errorBound?: number;
+  exact?: boolean;
 }
 
 /** Memory shared by the workers sweeping one class: its value tables, each cell computed once (`family-scan.ts`). */

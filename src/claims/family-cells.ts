@@ -1,4 +1,4 @@
-import { countFamily, FAMILY_SIDE_ORDER, makeRegion, type SafeInt, type Semiring } from '../engine/index.js';
+import { FAMILY_SIDE_ORDER, makeRegion, type PieceSet, type Region } from '../engine/index.js';
 import type { SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
 import { rankString, unrankString } from './multiset-rank.js';
@@ -62,8 +62,14 @@ export interface LeftTable {
   readonly stride: Float64Array;
 }
 
+/**
+ * One float64 per boundary of a product family (countFamily's order), equal exactly when the values compare
+ * equal (integer values, or residue codes: residue-tables.ts); null when the family cannot be tabulated.
+ */
+export type FamilyValues = (region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet) => Float64Array | null;
+
 /** Builders of a claim's cells: left tables (private or in shared memory) and the cell that compares b with T(b). */
-export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, sameTheory: boolean) {
+export function familyCells(program: ClaimProgram, familyValues: FamilyValues, sameTheory: boolean) {
   const alphabet = program.left.boundaryLabels;
   const sideMap = program.sideMap!;
 
@@ -92,7 +98,7 @@ export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, 
     return guarded(() => {
       const candidates = candidatesOf(layout, contents);
       if (candidates.reduce((p, l) => p * l.length, 1) > MAX_CELL) return undefined;
-      const values = countFamily(makeRegion(cls.lengths), candidates, program.left, { semiring }).numbers;
+      const values = familyValues(makeRegion(cls.lengths), candidates, program.left);
       return values ? { values, stride: strides(candidates.map((l) => l.length)) } : undefined;
     });
   }
@@ -129,7 +135,7 @@ export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, 
         if (hi <= lo) return true;
         const sub = candidates.slice();
         sub[split] = candidates[split]!.slice(lo, hi);
-        const t = countFamily(region, sub, program.left, { semiring }).numbers;
+        const t = familyValues(region, sub, program.left);
         if (!t) return undefined;
         const block = (hi - lo) * inner;
         for (let o = 0; o < outer; o++) values.set(t.subarray(o * block, o * block + block), (o * n + lo) * inner);
@@ -245,7 +251,7 @@ export function familyCells(program: ClaimProgram, semiring: Semiring<SafeInt>, 
       return { ok: true, left: own.values, leftStride, right: other.values, rightStride: other.stride, rankMap: target.rankMap, inClass: true, partnerBase, partnerCoef, entries: 0, inner: new Map() };
     }
     // Another theory or outside the class: a table of the images themselves, read by b's own digits (no pairing then).
-    const right = countFamily(makeRegion(lengths), images, program.right, { semiring }).numbers;
+    const right = familyValues(makeRegion(lengths), images, program.right);
     if (!right) return undefined;
     const identity = images.map((list) => Int32Array.from(list, (_, d) => d));
     return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length, inner: new Map() };

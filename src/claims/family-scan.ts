@@ -1,9 +1,11 @@
-import { fillingCountSemiring, integerSemiring, type SafeInt, type Semiring } from '../engine/index.js';
+import { countFamily, fillingCountSemiring, integerSemiring, type SafeInt, type Semiring } from '../engine/index.js';
 import type { ScanTally, SharedTables, SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
-import { familyCells, NOT_TABULATED, type Ahead, type Cell, type InnerSums, type LeftTable, type SharedView } from './family-cells.js';
+import { familyCells, NOT_TABULATED, type Ahead, type Cell, type FamilyValues, type InnerSums, type LeftTable, type SharedView } from './family-cells.js';
 import type { ClaimPlanExt } from './plan-claim.js';
 import { TABLE_PARTS, tableShape } from './shared-tables.js';
+import { residueScannable, residueTables, type ClassBounds } from './residue-tables.js';
+import { applySideMap } from './side-map.js';
 
 /** The bulk path of a sweep: integer values of a whole class from value tables, compared by index arithmetic. */
 export interface FamilyScanner {
@@ -22,27 +24,44 @@ export interface ScanSetup {
   /** {b, T(b)} checked once (the evaluator's own rule: involutive transform, same theory, symmetric relation). */
   readonly involutive: boolean;
   readonly sameTheory: boolean;
+  /** Exact values only (--exact): modular comparisons are not scanned. */
+  readonly exact: boolean;
 }
 
 // Table entries kept per worker (8 bytes each): the 6×6 parallelogram family needs 0.85 M per theory.
 const CACHE_ENTRIES = 6_000_000;
-/** Whether a claim's sweeps can be decided from value tables: integer values compared for equality through a side map. */
+/** Whether a claim's sweeps can be decided from value tables: integer values (or, unless exact, residue codes) compared for equality through a side map. */
 export function scannable(program: ClaimProgram): boolean {
+  return integerScannable(program) || residueScannable(program);
+}
+
+function integerScannable(program: ClaimProgram): boolean {
   const measure = program.claim.compare.measure.type;
   const integer = measure === 'puzzles' || (measure === 'value' && !program.polynomial);
   if (!integer || program.formula || !program.sideMap || program.claim.compare.relation.type !== 'equal' || program.relation.substitution || program.relation.searchSpace) return false;
   return program.left.boundaryLabels.every((a) => a.length === 1);
 }
 
-/** The bulk scanner of a claim, or undefined when it is not `scannable`. */
+// A decision from residue codes, as the per-instance path tallies a modular result.
+function modular(tally: ScanTally, bound: number): void {
+  tally.errorBound = (tally.errorBound ?? 0) + bound;
+  tally.exact = false;
+}
+
+/** The bulk scanner of a claim, or undefined when it is not `scannable` (or its comparison is modular and the run exact). */
 export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
   const { program, plan, involutive, sameTheory } = setup;
-  if (!scannable(program)) return undefined;
+  const integer = integerScannable(program);
+  if (!integer && (setup.exact || !residueScannable(program))) return undefined;
   const measure = program.claim.compare.measure.type;
   const sideMap = program.sideMap!;
   const views = new Map<string, SharedView | undefined>();
   const semiring: Semiring<SafeInt> = measure === 'puzzles' ? fillingCountSemiring : integerSemiring;
-  const { leftTable, sharedLeftTable, buildCell } = familyCells(program, semiring, sameTheory);
+  // Modular comparisons compare residue codes, each decision carrying its Schwartz–Zippel bound.
+  const residues = integer ? undefined : residueTables(program);
+  const values: FamilyValues = residues ? residues.table : (region, candidates, pieces) => countFamily(region, candidates, pieces, { semiring }).numbers;
+  const bounds = new Map<string, ClassBounds | undefined>();
+  const { leftTable, sharedLeftTable, buildCell } = familyCells(program, values, sameTheory);
   const nonzeroOnly = program.claim.family.nonzeroOnly;
   // Cells and their left tables, dropped together when the tables outgrow the budget.
   const cells = new Map<string, Cell>();
@@ -60,6 +79,13 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
   const scan: FamilyScanner['scan'] = (cls, start, end, tally, fallback, tables) => {
     const layout = plan.layoutOf(cls);
     if (layout.count > BigInt(Number.MAX_SAFE_INTEGER)) return false;
+    let bound: ClassBounds | undefined;
+    if (residues) {
+      if (!bounds.has(cls.key)) bounds.set(cls.key, residues.classBounds(cls.lengths, applySideMap(sideMap, cls.lengths, cls.lengths.map(() => '')).lengths));
+      bound = bounds.get(cls.key);
+      // A bound too weak to claim anything: the per-instance path decides such a class exactly.
+      if (!bound) return false;
+    }
     let shared: SharedView | undefined;
     if (tables) {
       const id = `${tables.id}|${cls.key}`;
@@ -252,6 +278,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       if (nonzeroOnly && l === 0 && !pairable) {
         tally.checked++;
         tally.skippedZero++;
+        if (bound) modular(tally, bound.zero);
         continue;
       }
       if (l !== right[at]) {
@@ -261,6 +288,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       }
       const both = pairable ? 2 : 1;
       tally.checked++;
+      if (bound) modular(tally, bound.holds);
       if (nonzeroOnly && l === 0) tally.skippedZero += both;
       else {
         tally.holds += both;
