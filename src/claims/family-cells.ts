@@ -1,4 +1,4 @@
-import { FAMILY_SIDE_ORDER, makeRegion, type PieceSet, type Region } from '../engine/index.js';
+import { countFamily, FAMILY_SIDE_ORDER, makeRegion, type PieceSet, type Region, type SafeInt, type Semiring } from '../engine/index.js';
 import type { SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
 import { rankString, unrankString } from './multiset-rank.js';
@@ -69,7 +69,9 @@ export interface LeftTable {
 export type FamilyValues = (region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet) => Float64Array | null;
 
 /** Builders of a claim's cells: left tables (private or in shared memory) and the cell that compares b with T(b). */
-export function familyCells(program: ClaimProgram, familyValues: FamilyValues, sameTheory: boolean) {
+export function familyCells(program: ClaimProgram, values: FamilyValues | Semiring<SafeInt>, sameTheory: boolean) {
+  // An integer semiring: its values as they are, while every one is a safe integer.
+  const familyValues: FamilyValues = typeof values === 'function' ? values : (region, candidates, pieces) => countFamily(region, candidates, pieces, { semiring: values }).numbers;
   const alphabet = program.left.boundaryLabels;
   const sideMap = program.sideMap!;
 

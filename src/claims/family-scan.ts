@@ -1,4 +1,4 @@
-import { countFamily, fillingCountSemiring, integerSemiring, type SafeInt, type Semiring } from '../engine/index.js';
+import { fillingCountSemiring, integerSemiring, type SafeInt, type Semiring } from '../engine/index.js';
 import type { ScanTally, SharedTables, SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
 import { familyCells, NOT_TABULATED, type Ahead, type Cell, type FamilyValues, type InnerSums, type LeftTable, type SharedView } from './family-cells.js';
@@ -59,7 +59,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
   const semiring: Semiring<SafeInt> = measure === 'puzzles' ? fillingCountSemiring : integerSemiring;
   // Modular comparisons compare residue codes, each decision carrying its Schwartz–Zippel bound.
   const residues = integer ? undefined : residueTables(program);
-  const values: FamilyValues = residues ? residues.table : (region, candidates, pieces) => countFamily(region, candidates, pieces, { semiring }).numbers;
+  const values: FamilyValues | Semiring<SafeInt> = residues ? residues.table : semiring;
   const bounds = new Map<string, ClassBounds | undefined>();
   const { leftTable, sharedLeftTable, buildCell } = familyCells(program, values, sameTheory);
   const nonzeroOnly = program.claim.family.nonzeroOnly;
