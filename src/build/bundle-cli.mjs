@@ -1,21 +1,26 @@
-// `npm run build`, after tsc: bundles the CLI entry (dist/cli/main.js) with esbuild so that a start-up reads
-// a few files instead of ~100 modules (yargs and its dependencies, the engine, the command). The commands
-// that start worker threads or find files next to their own module (new URL(…, import.meta.url)) stay
-// tsc's separate files, imported at run time by the same relative path, so their paths keep working.
-// Then renders the top-level --help once with yargs into dist/cli/help.txt (main.ts prints that copy).
+// `npm run build`, after tsc: bundles the CLI entry (src/cli/main.ts) with esbuild into one CommonJS script,
+// dist/cli/main-bundle.cjs (yargs and its dependencies, zod, the engine, the claims, the store, the light commands),
+// and writes dist/cli/main.js, a small loader (src/build/cli-loader.mjs) that runs the bundle with a V8 code cache
+// made here by a few training runs. The commands that start worker threads or find files next to their own
+// module (new URL(…, import.meta.url)) stay tsc's separate ES modules, which the bundle require()s by the same
+// relative path (Node ≥ 20.19 requires ES modules), so their paths keep working.
+// Then renders the top-level --help once with yargs into dist/cli/help.txt (the loader prints that copy).
 import { build } from 'esbuild';
 import { spawnSync } from 'node:child_process';
-import { readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { createHash } from 'node:crypto';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outdir = join(root, 'dist', 'cli');
-// Commands bundled into the entry's chunks; every other command module is loaded from tsc's dist/cli/commands.
+// Commands bundled with the entry; every other command module is loaded from tsc's dist/cli/commands.
 const BUNDLED = new Set(['count', 'status', 'show', 'expand', 'schema', 'counterexamples', 'replay', 'report', 'merge', 'run-claims']);
 // Bundled modules that use import.meta only for a path valid from both dist/<dir>/ and dist/cli/.
 const LOCATION_FREE = new Set(['src/run/worker-pool.ts']);
-const CHUNK_PREFIX = 'main-chunk-';
+// Files of earlier builds: the ES module chunks the bundle used to be split into, and code caches of other builds.
+const STALE = /^(main-chunk-.*\.js(\.map)?|main-bundle\.[0-9a-f]+\.cache)$/;
 
 const commandsExternal = {
   name: 'unbundled-commands',
@@ -47,25 +52,28 @@ const lazyStringWidth = {
   },
 };
 
-for (const f of readdirSync(outdir)) if (f.startsWith(CHUNK_PREFIX)) rmSync(join(outdir, f));
+for (const f of readdirSync(outdir)) if (STALE.test(f)) rmSync(join(outdir, f));
 const result = await build({
   absWorkingDir: root,
-  entryPoints: { main: 'src/cli/main.ts' },
-  outdir,
+  entryPoints: ['src/cli/main.ts'],
+  outfile: join(outdir, 'main-bundle.cjs'),
   bundle: true,
-  splitting: true,
-  format: 'esm',
+  // One CommonJS script: vm.Script takes a code cache, an ES module cannot in Node 20. Modules load lazily inside
+  // it as before (esbuild runs a dynamically imported module's body on first import).
+  format: 'cjs',
   platform: 'node',
   target: 'node20',
-  chunkNames: `${CHUNK_PREFIX}[hash]`,
+  // A dynamic import() inside a vm.Script compiled from a code cache has no loader to call; the unbundled
+  // commands are require()d instead (ES modules without top-level await, which Node ≥ 20.19 requires).
+  supported: { 'dynamic-import': false },
   // Native addon and worker-thread pool: resolved from node_modules at run time.
   external: ['better-sqlite3', 'piscina'],
-  // CommonJS dependencies inside an ES module bundle call require() for Node's built-ins.
-  banner: { js: "import { createRequire as __bundleRequire } from 'node:module'; const require = __bundleRequire(import.meta.url);" },
-  // main.ts prints help.txt only in this bundle (both come from the same build).
-  define: { PUZZLESWEEP_BUNDLE: 'true' },
+  // The loader passes the bundle's own path as __filename: import.meta.url of the bundled modules is the bundle's URL.
+  define: { 'import.meta.url': '__bundleUrl' },
+  banner: { js: "var __bundleUrl = require('node:url').pathToFileURL(__filename).href;" },
   sourcemap: 'linked',
   metafile: true,
+  write: false,
   logLevel: 'warning',
   plugins: [commandsExternal, lazyStringWidth],
 });
@@ -77,9 +85,51 @@ if (moved.length > 0) {
   process.exit(1);
 }
 
-const help = spawnSync(process.execPath, [join(outdir, 'main.js'), '--help'], { encoding: 'utf8', env: { ...process.env, PUZZLESWEEP_RENDER_HELP: '1' } });
+let bundleText = '';
+for (const file of result.outputFiles) {
+  // The loader wraps the bundle in a function, where main.ts's #! line would not parse.
+  const text = file.path.endsWith('.cjs') ? file.text.replace(/^#!.*/, '') : file.text;
+  if (file.path.endsWith('.cjs')) bundleText = text;
+  writeFileSync(file.path, text);
+}
+// The cache's name carries a hash of the bundle, so a loader never reads the cache of another build.
+const buildId = createHash('sha256').update(bundleText).digest('hex').slice(0, 16);
+const loader = readFileSync(join(root, 'src', 'build', 'cli-loader.mjs'), 'utf8').replace("'__PUZZLESWEEP_BUILD__'", JSON.stringify(buildId));
+writeFileSync(join(outdir, 'main.js'), loader, { mode: 0o755 });
+
+const cli = (args, env = {}, cwd = root) => spawnSync(process.execPath, [join(outdir, 'main.js'), ...args], { encoding: 'utf8', cwd, env: { ...process.env, ...env } });
+const help = cli(['--help'], { PUZZLESWEEP_RENDER_HELP: '1' });
 if (help.status !== 0 || help.stdout.length === 0) {
   process.stderr.write(`bundle-cli: expected --help to print the help, received exit ${help.status}\n${help.stderr}`);
   process.exit(1);
 }
 writeFileSync(join(outdir, 'help.txt'), help.stdout);
+
+// Training runs: each loads the cache so far and writes it back with what it compiled, so the cache holds what a
+// small sweep in the main thread, a count and a status call run (a claim of our own, a few hundred labelings).
+const cache = join(outdir, `main-bundle.${buildId}.cache`);
+const work = mkdtempSync(join(tmpdir(), 'puzzlesweep-build-'));
+try {
+  const claim = join(work, 'training.json');
+  writeFileSync(
+    claim,
+    JSON.stringify({
+      id: 'training',
+      statement: 'Exchanging sides 1 and 4 keeps the cohomology value.',
+      theory: 'cohomology',
+      family: { sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }], conditions: [{ type: 'sameContent', sides: [1, 4] }] },
+      transform: [{ type: 'exchange', sides: [1, 4] }],
+      compare: { measure: { type: 'value' }, relation: { type: 'equal' } },
+    }),
+  );
+  const db = join(work, 'training.sqlite');
+  for (const args of [['run', claim, '--db', db, '--json'], ['count', '--theory', 'cohomology', '--partitions', '31,21,421', '--grassmannian', '3,7'], ['status', '--db', db]]) {
+    const r = cli(args, { PUZZLESWEEP_WRITE_CODE_CACHE: cache }, work);
+    if (r.status !== 0) {
+      process.stderr.write(`bundle-cli: expected the training run \`${args[0]}\` to exit 0, received exit ${r.status}\n${r.stderr}`);
+      process.exit(1);
+    }
+  }
+} finally {
+  rmSync(work, { recursive: true, force: true });
+}

@@ -13,28 +13,6 @@ const argv = joinDashValues(process.argv.slice(2));
 const json = argv.includes('--json');
 const asksHelp = argv.includes('--help') || argv.includes('-h') || argv.includes('--version');
 
-/** Defined (true) only in the bundle that src/build/bundle-cli.mjs builds, together with help.txt. */
-declare const PUZZLESWEEP_BUNDLE: true | undefined;
-
-/** Set to render `--help` with yargs even when the build's copy of it exists (the build sets it to make that copy). */
-const RENDER_HELP_ENV = 'PUZZLESWEEP_RENDER_HELP';
-
-/**
- * The top-level help as yargs rendered it at build time (src/build/bundle-cli.mjs writes dist/cli/help.txt), when
- * it applies: yargs wraps at min(80, terminal columns), so the copy serves only 80 columns or more.
- */
-function builtHelp(): string | undefined {
-  // Only the bundle uses the copy: a plain `tsc` build rewrites main.js but leaves an older help.txt behind.
-  if (typeof PUZZLESWEEP_BUNDLE === 'undefined') return undefined;
-  if (argv.length !== 1 || argv[0] !== '--help' || process.env[RENDER_HELP_ENV]) return undefined;
-  if ((process.stdout.columns ?? 80) < 80) return undefined;
-  try {
-    return readFileSync(new URL('./help.txt', import.meta.url), 'utf8');
-  } catch {
-    return undefined; // run from src/ or an unbundled build: yargs renders it
-  }
-}
-
 interface DeclaredOptions {
   getOptions(): { key: Record<string, unknown>; alias: Record<string, string[]>; boolean: string[]; number: string[]; array: string[]; choices: Record<string, unknown[]> };
   getDemandedOptions(): Record<string, unknown>;
@@ -116,6 +94,6 @@ async function parse(): Promise<void> {
     .parseAsync();
 }
 
-const help = builtHelp();
-if (help !== undefined) process.stdout.write(help);
-else await parse();
+// Not a top-level await: the build bundles this entry as a CommonJS script (src/build/bundle-cli.mjs). A rejection
+// is unhandled, which Node reports and exits 1 on, as it did for a rejected top-level await.
+void parse();

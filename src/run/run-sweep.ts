@@ -7,7 +7,7 @@ import type { RunOptions } from './run-options.js';
 import { sweepClaim, type SweepProgress } from './sweep-claim.js';
 import type { ClaimSummary, SweepSummary } from './sweep-summary.js';
 import { InProcessRunner } from './in-process-runner.js';
-import { WorkerPool, type TaskRunner } from './worker-pool.js';
+import type { TaskRunner } from './worker-pool.js';
 import { workerThreads } from './worker-threads.js';
 
 /** Exit status of `run --shard` when the shard stopped before its work was done (run it again to resume). */
@@ -26,12 +26,15 @@ export interface SweepInput {
   readonly pool?: TaskRunner | undefined;
 }
 
+// piscina and worker_threads load only for a sweep on worker threads: a small family is swept in the main thread.
+const workerPool = async (threads: number): Promise<TaskRunner> => new (await import('./worker-pool.js')).WorkerPool(threads);
+
 /**
  * Worker threads asked for by number, started at once so that their start-up (a thread, the worker's
  * bundle, its modules) overlaps the claims' compilation, the planning and the store's opening.
  */
-export function startWorkers(options: { readonly workers?: number | undefined }): TaskRunner | undefined {
-  return options.workers ? new WorkerPool(options.workers) : undefined;
+export async function startWorkers(options: { readonly workers?: number | undefined }): Promise<TaskRunner | undefined> {
+  return options.workers ? workerPool(options.workers) : undefined;
 }
 
 /** 130 interrupted, 1 a counterexample is known, 4 anything requested left unfinished (or nothing to check), else 0. */
@@ -45,15 +48,15 @@ export function sweepExitCode(claims: readonly ClaimSummary[], interrupted: bool
 /** Sweeps each claim in turn on one worker pool and one store; returns data, prints nothing. */
 export async function runSweep(input: SweepInput): Promise<SweepSummary> {
   const began = Date.now();
-  let pool: TaskRunner | undefined = input.pool ?? startWorkers(input.options);
+  let pool: TaskRunner | undefined = input.pool ?? (await startWorkers(input.options));
   try {
-    return await sweepAll(input, began, (threads) => (pool ??= threads === 0 ? new InProcessRunner() : new WorkerPool(threads)));
+    return await sweepAll(input, began, async (threads) => (pool ??= threads === 0 ? new InProcessRunner() : await workerPool(threads)));
   } finally {
     await pool?.destroy();
   }
 }
 
-async function sweepAll(input: SweepInput, began: number, runner: (threads: number) => TaskRunner): Promise<SweepSummary> {
+async function sweepAll(input: SweepInput, began: number, runner: (threads: number) => Promise<TaskRunner>): Promise<SweepSummary> {
   const { options: given } = input;
   // Every claim is planned and its size checked before the store is opened: an absurd bound writes nothing.
   const plans: ClaimPlan[] = [];
@@ -70,7 +73,7 @@ async function sweepAll(input: SweepInput, began: number, runner: (threads: numb
     for (const claim of input.claims) plans.push(runtime.createClaimRuntime(claim.canonicalJson, { exact: given.exact }).plan);
   }
   const options = { ...given, workers: workerThreads(given.workers, plans, given.max) };
-  const pool = runner(options.workers);
+  const pool = await runner(options.workers);
   const db = openStore(options.db);
   const deadline = options.timeLimit !== undefined ? began + options.timeLimit * 1000 : undefined;
   const claims: ClaimSummary[] = [];

@@ -79,7 +79,7 @@ export const runClaimsCommand: CommandModule<object, RunArgs> = {
         process.stderr.write(`⚠ --workers ${options.workers} is above this machine's ${cores} cores: the extra threads share cores and slow each other down (the default is ${cores})\n`);
       }
       // Threads asked for by number start before the claims compile; runSweep destroys them.
-      const pool = startWorkers(options);
+      const pool = await startWorkers(options);
       let claims;
       try {
         // Every claim is validated before the store is opened, so bad input never touches it.
