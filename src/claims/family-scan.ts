@@ -106,9 +106,11 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       offsets: [...g.contents.map((c) => Number(c.offset)), Number(g.size)],
       strings: g.contents.map((c) => Number(c.strings)),
     }));
-    // The cells this chunk meets lie between those of its first and last outer digits (key order = index order
-    // of the outer groups): a worker that would wait for another's part computes one of these instead.
-    const ahead: Ahead | undefined = shared ? { next: outerKeyAt(groups, Number(start) / groups[groups.length - 1]!.size) * groups[groups.length - 1]!.strings.length, last: (outerKeyAt(groups, (Number(end) - 1) / groups[groups.length - 1]!.size) + 1) * groups[groups.length - 1]!.strings.length - 1 } : undefined;
+    // A worker that would wait for another's part computes an unclaimed one instead: first the cells of this
+    // chunk (from those of its first outer digits, in key order = index order of the outer groups), then the
+    // class's later cells, which later chunks need (every cell of a swept class is needed once).
+    const inner = groups[groups.length - 1]!;
+    const ahead: Ahead | undefined = shared ? { next: outerKeyAt(groups, Number(start) / inner.size) * inner.strings.length, last: shared.shape.cells - 1 } : undefined;
     const leftOf = (contents: readonly number[]) => {
       const key = `${shared ? `${tables!.id}|` : ''}${cls.key}|${contents.join(',')}`;
       if (!lefts.has(key)) {

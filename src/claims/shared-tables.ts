@@ -2,7 +2,7 @@ import type { SharedTables } from './claim-api.js';
 import type { Layout } from './plan-claim.js';
 
 /** Parts a cell's table is cut into, so that several workers needing one cell each compute some of it. */
-export const TABLE_PARTS = 4;
+export const TABLE_PARTS = 8;
 // Shared tables of one class above this many entries (8 bytes each) are not allocated: workers keep their own.
 const MAX_SHARED_ENTRIES = 1 << 24;
 const MAX_CELLS = 1 << 16;
