@@ -1,25 +1,16 @@
 /**
  * One sweep benchmark case in a fresh process (so peak memory is its own); prints JSON. Invoked by
- * sweep-benchmark.ts as `node --import tsx sweep-case.ts <json>`; workers run the built dist/ files.
+ * sweep-benchmark.ts as `node --import tsx sweep-case.ts <json>`. Whole sweeps are timed as CLI processes there.
  */
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { applyTransform, compileClaimProgram, createEvaluator, parseClaim, planClaim, type ClaimInput } from '../../src/claims/index.js';
 import { countBoundary, integerSemiring, makeRegion } from '../../src/engine/index.js';
-import { loadSweepClaim } from '../../src/run/load-sweep-claim.js';
-import { parseRunOptions } from '../../src/run/run-options.js';
-import { runSweep } from '../../src/run/run-sweep.js';
 
 export type SweepCase =
   | { kind: 'batched' | 'per-instance'; claim: ClaimInput; limit: number }
-  | { kind: 'evaluate'; claim: ClaimInput; exact: boolean; limit: number }
-  | { kind: 'pool'; claim: ClaimInput; workers: number; chunkSize: number };
-
-const rss = () => process.memoryUsage().rss / 2 ** 20;
+  | { kind: 'evaluate'; claim: ClaimInput; exact: boolean; limit: number };
 
 // One process-local loop over the first `limit` instances of the claim's first class.
-function inProcess(c: Extract<SweepCase, { limit: number }>): Record<string, unknown> {
+function inProcess(c: SweepCase): Record<string, unknown> {
   const claim = parseClaim(c.claim);
   const plan = planClaim(compileClaimProgram(claim));
   const cls = plan.classes()[0]!;
@@ -44,27 +35,6 @@ function inProcess(c: Extract<SweepCase, { limit: number }>): Record<string, unk
   return { instances: n, holds, ms, perSecond: (n / ms) * 1000 };
 }
 
-async function pool(c: Extract<SweepCase, { kind: 'pool' }>): Promise<Record<string, unknown>> {
-  const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-bench-'));
-  const file = join(dir, 'claim.json');
-  writeFileSync(file, JSON.stringify(c.claim));
-  const samples: number[] = [];
-  let total = 0;
-  const start = performance.now();
-  const s = await runSweep({
-    claims: [loadSweepClaim(file)],
-    options: parseRunOptions({ db: join(dir, 'bench.sqlite'), workers: c.workers, chunkSize: c.chunkSize }),
-    onProgress: (p) => {
-      total = p.total;
-      if (samples.length < Math.floor((p.checked / Math.max(p.total, 1)) * 10)) samples.push(Math.round(rss()));
-    },
-  });
-  const ms = performance.now() - start;
-  rmSync(dir, { recursive: true, force: true });
-  const checked = s.claims[0]!.instancesChecked;
-  return { instances: checked, total, ms, perSecond: (checked / ms) * 1000, rssSamplesMB: samples, maxRssMB: process.resourceUsage().maxRSS / 1024 };
-}
-
 const c = JSON.parse(process.argv[2]!) as SweepCase;
-const out = c.kind === 'pool' ? await pool(c) : inProcess(c);
+const out = inProcess(c);
 process.stdout.write(`${JSON.stringify({ ...out, maxRssMB: process.resourceUsage().maxRSS / 1024 })}\n`);
