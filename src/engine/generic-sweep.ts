@@ -107,7 +107,7 @@ export const BYTES_PER_TERM = 120;
 export function estimateBytes<T>(semiring: Semiring<T>, table: Map<number, T>): number {
   let terms = 0;
   if (semiring.terms) for (const v of table.values()) terms += semiring.terms(v);
-  return table.size * BYTES_PER_PROFILE + terms * BYTES_PER_TERM;
+  return table.size * BYTES_PER_PROFILE + terms * (semiring.termBytes ?? BYTES_PER_TERM);
 }
 
 /** The value of one fixed boundary in any semiring (packed profiles). */

@@ -32,6 +32,20 @@ export interface Semiring<T> {
   readonly numeric?: NumericForm;
   /** Optional: the number of terms a value holds, for the memory estimate of long sweeps. */
   terms?(a: T): number;
+  /** Optional: bytes one term takes in a sweep's table (default: a Map entry's, `BYTES_PER_TERM`). */
+  readonly termBytes?: number;
+  /**
+   * Optional: a cheaper form of these values that sweeps compute in (polynomials as typed arrays);
+   * the same object on every call, so weight tables cached per ring stay valid.
+   */
+  work?(): WorkForm<T>;
+}
+
+/** Values of a ring in another form: sweeps run in `semiring` and convert each final value `out`. */
+export interface WorkForm<T> {
+  readonly semiring: Semiring<unknown>;
+  into(value: T): unknown;
+  out(value: unknown): T;
 }
 
 /**

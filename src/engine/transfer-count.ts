@@ -1,5 +1,5 @@
 import { checkBoundary, reverseString, type Boundary } from './boundary.js';
-import { genericWeights, numericLanes } from './count-kernel.js';
+import { numericLanes } from './count-kernel.js';
 import { defaultStrategy } from './default-strategy.js';
 import { BYTES_PER_PROFILE, BYTES_PER_TERM, genericCountFixed, genericSweepOpen } from './generic-sweep.js';
 import { fillingCountSemiring } from './semirings/integer-semiring.js';
@@ -12,6 +12,7 @@ import { compilePlan, expandStep, type TransferPlan } from './transfer-plan.js';
 import { fitsNumeric, sweepNumeric, type WeightTable } from './transfer-numeric.js';
 import { declaredWeigher, type Weigher } from './weigher.js';
 import { tupleSemiring } from './semirings/tuple-semiring.js';
+import { workRing } from './work-ring.js';
 import { CodedError } from '../errors/index.js';
 
 export type { ProgressCallback, SweepStrategy } from './numeric-kernel.js';
@@ -139,13 +140,14 @@ function countOne<T>(region: Region, boundary: Boundary, pieces: PieceSet, optio
       if (!(e instanceof NumericOverflow)) throw e;
     }
   }
-  if (options.memoryLimitBytes !== undefined && semiring.terms) refuseEarly(plan, label, initial, target, strategy, options.memoryLimitBytes);
-  return genericCountFixed(plan, label, initial, target, semiring, genericWeights(plan, semiring, weigher, cacheable), strategy, hooks);
+  const work = workRing(plan, semiring, weigher, cacheable);
+  if (options.memoryLimitBytes !== undefined && work.semiring.terms) refuseEarly(plan, label, initial, target, strategy, options.memoryLimitBytes, work.semiring.termBytes ?? BYTES_PER_TERM);
+  return work.out(genericCountFixed(plan, label, initial, target, work.semiring, work.weights, strategy, hooks));
 }
 
 // A numeric pre-pass visits the same profiles as the generic sweep will; each holds at least one
 // term, so if even that lower bound exceeds the limit, refuse before the long sweep starts.
-function refuseEarly(plan: KernelPlan, label: Int32Array, initial: number, target: number, strategy: SweepStrategy, limit: number): void {
+function refuseEarly(plan: KernelPlan, label: Int32Array, initial: number, target: number, strategy: SweepStrategy, limit: number, termBytes: number): void {
   const probe = numericLanes(plan, [{ semiring: fillingCountSemiring as Semiring<unknown>, weigher: declaredWeigher(fillingCountSemiring) as Weigher<unknown>, cacheable: true }]);
   if (!probe) return;
   let peak = 0;
@@ -154,7 +156,7 @@ function refuseEarly(plan: KernelPlan, label: Int32Array, initial: number, targe
   } catch (e) {
     if (!(e instanceof NumericOverflow)) throw e;
   }
-  const need = peak * (BYTES_PER_PROFILE + BYTES_PER_TERM);
+  const need = peak * (BYTES_PER_PROFILE + termBytes);
   if (need > limit) throw memoryLimitError(need, limit, peak, plan.stepCount);
 }
 
@@ -197,7 +199,8 @@ export function countCompletions<T>(region: Region, sides: readonly (string | nu
       if (!(e instanceof NumericOverflow)) throw e;
     }
   }
-  for (const [key, v] of genericSweepOpen(plan, label, initial, semiring, genericWeights(plan, semiring, weigher, cacheable), hooks)) out.set(side5OfKey(plan, key), v);
+  const work = workRing(plan, semiring, weigher, cacheable);
+  for (const [key, v] of genericSweepOpen(plan, label, initial, work.semiring, work.weights, hooks)) out.set(side5OfKey(plan, key), work.out(v));
   return out;
 }
 

@@ -1,4 +1,5 @@
 import type { Semiring } from '../semiring.js';
+import { packedForm, type PackedForm } from './packed-polynomial-semiring.js';
 import { addPoly, addPolyInPlace, constantPoly, mulPoly, ONE_POLY, polyEquals, polyText, subPoly, variablePoly, ZERO_POLY, type Polynomial } from './polynomial.js';
 
 export interface PolynomialSemiring extends Semiring<Polynomial> {
@@ -13,7 +14,8 @@ export interface PolynomialSemiring extends Semiring<Polynomial> {
 export function polynomialSemiring(size: number): PolynomialSemiring {
   const names: string[] = [];
   const variableName = (k: number) => (k < size ? `y${k + 1}` : (names[k - size] ?? `v${k}`));
-  return {
+  let work: PackedForm | undefined;
+  const ring: PolynomialSemiring = {
     name: 'polynomial',
     size,
     variableNames: names,
@@ -35,5 +37,8 @@ export function polynomialSemiring(size: number): PolynomialSemiring {
     strip: (_letter, index) => variablePoly(index - 1),
     toText: (a) => polyText(a, variableName),
     terms: (a) => a.size,
+    // Sweeps compute in typed arrays of interned monomials (one table per ring, kept while it lives).
+    work: () => (work ??= packedForm(ring)),
   };
+  return ring;
 }
