@@ -1,4 +1,5 @@
 import {
+  countBoundary,
   countCompletions,
   DEFAULT_PRIMES,
   fractionSemiring,
@@ -123,7 +124,19 @@ export class Meter {
     const last = this.last.get(tag);
     if (useCache && last && sameButSide5(last.lengths, lengths, last.sides, sides)) return last.map;
     const key = `${tag}|${lengths.join(',')}|${sides.map((s, i) => (i === 4 ? '' : s)).join('|')}`;
-    let map = useCache ? this.cache.get(key) : undefined;
+    if (!useCache) {
+      // One boundary from scratch (a confirmation): a closed count, which meets in the middle, costs far
+      // less than a sweep for every side-5 labeling. A failing pair confirms b with T(b), then T(b) with b:
+      // each boundary's own exact count serves both (never a value of another boundary, nor a modular one).
+      const whole = `${key}|${sides[4]}`;
+      let one = this.confirmed.get(whole);
+      if (!one) {
+        one = new Map<string, unknown>([[sides[4]!, post(countBoundary(makeRegion(lengths), sides, this.pieces, options()))]]);
+        this.confirmed.set(whole, one);
+      }
+      return one;
+    }
+    let map = this.cache.get(key);
     if (!map) {
       const raw = countCompletions(makeRegion(lengths), sides, this.pieces, options());
       map = new Map<string, unknown>();
@@ -197,17 +210,25 @@ export class Meter {
     return { degree: triangles * weightDegree(this.pieces) };
   }
 
+  private readonly rings = new Map<string, unknown>();
+  /** Exact closed counts of the last boundaries confirmed (a failing pair's two confirmations share them). */
+  private readonly confirmed = new LruCache<string, Map<string, unknown>>(8);
+  private ringOf<R>(key: string, make: () => R): R {
+    let r = this.rings.get(key) as R | undefined;
+    if (r === undefined) this.rings.set(key, (r = make()));
+    return r;
+  }
+
   private polynomials(lengths: readonly number[], sides: readonly string[], useCache: boolean): Map<string, unknown> {
     const region = makeRegion(lengths);
-    let ring = polynomialSemiring(region.size);
+    // One ring per size, so the engine's weight tables (cached per plan and ring) are built once, not per
+    // confirmation; its named variables keep the indices they were first given, which `normalize` reads.
+    const ring = this.ringOf(`poly|${region.size}`, () => polynomialSemiring(region.size));
     return this.completions(
       'poly',
       lengths,
       sides,
-      () => {
-        ring = polynomialSemiring(region.size);
-        return { semiring: ring };
-      },
+      () => ({ semiring: ring }),
       (v) => this.normalize(v as Polynomial, region.size, ring.variableNames),
       useCache,
     );
@@ -215,15 +236,12 @@ export class Meter {
 
   private fractions(lengths: readonly number[], sides: readonly string[], useCache: boolean): Map<string, unknown> {
     const region = makeRegion(lengths);
-    let ring = fractionSemiring(region.size, this.letter);
+    const ring = this.ringOf(`frac|${region.size}`, () => fractionSemiring(region.size, this.letter));
     return this.completions(
       'frac',
       lengths,
       sides,
-      () => {
-        ring = fractionSemiring(region.size, this.letter);
-        return { semiring: ring };
-      },
+      () => ({ semiring: ring }),
       (v) => {
         const seen = ring.variableNames;
         const f = v as Fraction;
