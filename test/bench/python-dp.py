@@ -6,8 +6,8 @@ weight y_j - y_i. One DP per boundary; states are dictionaries keyed by tuples o
 
 Usage (prints one JSON line):
   python-dp.py count THEORY s1,s2,s3,s4,s5,s6        value of one boundary ('-' is an empty side)
-  python-dp.py family THEORY 'a,b,c,d,e,f;...' I J    every labeling whose sides I and J and their
-                                                       opposites have equal content; checks that
+  python-dp.py family THEORY 'a,b,c,d,e,f;...' I J    every labeling in which opposite sides of equal
+                                                       length have equal content; checks that
                                                        exchanging sides I and J keeps the value,
                                                        one open-bottom DP per top part
   python-dp.py plain THEORY 'a,b,c,d,e,f;...' I J     the same family and claim, the plain loop: one
@@ -187,6 +187,12 @@ def strings(length, ones=None):
             yield ''.join(bits)
 
 
+def contents_of(lengths, k):
+    """Contents (numbers of 1s) to loop over for sides k and k+3: all when they are tied (equal lengths),
+    else one pass (their strings are then every string, whatever the content)."""
+    return range(lengths[k] + 1) if lengths[k] == lengths[k + 3] else [0]
+
+
 def main():
     start = time.perf_counter()
     mode, theory, spec = sys.argv[1], sys.argv[2], sys.argv[3]
@@ -202,9 +208,9 @@ def main():
         for shape in spec.split(';'):
             lengths = [int(x) for x in shape.split(',')]
             p = Puzzle(theory, lengths)
-            for c0 in range(lengths[0] + 1):
-                for c1 in range(lengths[1] + 1):
-                    for c2 in range(lengths[2] + 1):
+            for c0 in contents_of(lengths, 0):
+                for c1 in contents_of(lengths, 1):
+                    for c2 in contents_of(lengths, 2):
                         contents = [c0, c1, c2, c0, c1, c2]
                         choices = [list(strings(lengths[k], contents[k] if lengths[k] == lengths[(k + 3) % 6] else None)) for k in range(6)]
                         for sides in itertools.product(*choices):
@@ -231,9 +237,9 @@ def main():
                 return cache[key]
 
             # Sides k and k+3 have equal content (equal numbers of 1s).
-            for c0 in range(lengths[0] + 1):
-                for c1 in range(lengths[1] + 1):
-                    for c2 in range(lengths[2] + 1):
+            for c0 in contents_of(lengths, 0):
+                for c1 in contents_of(lengths, 1):
+                    for c2 in contents_of(lengths, 2):
                         contents = [c0, c1, c2, c0, c1, c2]
                         choices = [list(strings(lengths[k], contents[k] if lengths[k] == lengths[(k + 3) % 6] else None)) for k in range(6)]
                         for top in itertools.product(choices[0], choices[1], choices[2], choices[3], choices[5]):
