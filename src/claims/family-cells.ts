@@ -1,8 +1,8 @@
 import { countFamily, FAMILY_SIDE_ORDER, makeRegion, type PieceSet, type Region, type SafeInt, type Semiring } from '../engine/index.js';
 import type { SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
-import { rankString, unrankString } from './multiset-rank.js';
-import type { Layout } from './plan-claim.js';
+import { nextString, rankString } from './multiset-rank.js';
+import type { Content, Layout } from './plan-claim.js';
 import { TABLE_PARTS, type TableShape } from './shared-tables.js';
 import { applySideMap } from './side-map.js';
 
@@ -84,12 +84,30 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     }
   }
 
+  // Each content's strings in rank order, listed once per claim: neighbouring cells (and T(b)'s cell) share
+  // contents, and unranking every string of every cell was a tenth of a small sweep.
+  const listed = new WeakMap<object, string[]>();
+  function stringsOf(content: Content): string[] {
+    let list = listed.get(content);
+    if (!list) {
+      list = [];
+      const labels = content.counts.flatMap((c, a) => new Array<number>(c).fill(a)); // the first in rank order
+      do list.push(labels.map((a) => alphabet[a]!).join(''));
+      while (nextString(labels));
+      listed.set(content, list);
+    }
+    return list;
+  }
+
   function candidatesOf(layout: Layout, contents: readonly number[]): string[][] {
     const candidates: string[][] = [[], [], [], [], [], []];
     layout.groups.forEach((g, gi) => {
-      const list: string[] = [];
-      for (const content of g.sides.length === 1 ? g.contents : [g.contents[contents[gi]!]!]) {
-        for (let r = 0n; r < content.strings; r++) list.push(unrankString(r, content.counts).map((a) => alphabet[a]!).join(''));
+      let list: string[];
+      if (g.sides.length > 1) list = stringsOf(g.contents[contents[gi]!]!);
+      else {
+        // A one-side group keeps all its strings in one list, every content in rank order.
+        list = listed.get(g) ?? g.contents.flatMap((c) => stringsOf(c));
+        listed.set(g, list);
       }
       for (const s of g.sides) candidates[s] = list;
     });

@@ -38,6 +38,8 @@ export interface FamilyTable<T> {
 
 interface Tables<S> {
   fresh(): S;
+  /** Hands the walk's tables back once its values are harvested (numeric tables are reused by the next walk). */
+  release?(tables: S[]): void;
   step(s: number, label: Int32Array, cur: S, next: S): void;
   seed(table: S, key: number): void;
   /** Writes the final table's values for each side-5 candidate key at out positions base + j. */
@@ -152,12 +154,25 @@ function walkFamily<S>(plan: KernelPlan, candidates: readonly (readonly string[]
     walk(0);
     r = end;
   }
+  tables.release?.(pool);
 }
+
+// Numeric tables of finished walks, by lane layout: a sweep of many small cells (one countFamily each) allocated
+// a few typed arrays per step of every walk. Every step and seed clears the table it writes. Only small tables
+// are kept, and only so many, so a large family's tables are not held after its walk.
+const SPARE_TABLES = 512;
+const SPARE_ENTRIES = 1 << 12;
+const spareTables = new Map<string, ProfileTable[]>();
 
 function numericTables(plan: KernelPlan, lanes: Lanes, numbers: Float64Array | Uint32Array): Tables<ProfileTable> {
   const L = lanes.count;
+  const spares = spareTables.get(`${L}:${residueLanes(lanes)}`) ?? [];
+  spareTables.set(`${L}:${residueLanes(lanes)}`, spares);
   return {
-    fresh: () => newTable(lanes),
+    fresh: () => spares.pop() ?? newTable(lanes),
+    release: (tables) => {
+      for (const t of tables) if (spares.length < SPARE_TABLES && t.keys.length <= SPARE_ENTRIES) spares.push(t);
+    },
     step: (s, label, cur, next) => forwardStep(plan, label, s, lanes, cur, next),
     seed: (t, key) => {
       t.clear();

@@ -66,6 +66,20 @@ describe('countFamily = one countBoundary per boundary', () => {
     }
   });
 
+  // Numeric walks reuse the tables of earlier walks (family-count.ts, spareTables): a walk after a larger one,
+  // in another theory, must still give one count per boundary [definition, as above].
+  it('a walk on tables a larger walk left behind still gives one count per boundary', () => {
+    const large = makeRegion([3, 3, 0, 3, 3, 0]);
+    countFamily(large, [binaryStrings(3), binaryStrings(3), [''], binaryStrings(3), binaryStrings(3), ['']], theoryPieceSet('cohomology'), { semiring: integerSemiring });
+    const pieces = theoryPieceSet('k-theory');
+    const region = makeRegion([1, 2, 1, 1, 2, 1]);
+    const candidates = [1, 2, 1, 1, 2, 1].map((len) => binaryStrings(len));
+    for (let round = 0; round < 2; round++) {
+      const table = countFamily(region, candidates, pieces, { semiring: integerSemiring });
+      for (const { index, sides } of entries(candidates)) expect(table.value(index)).toBe(countBoundary(region, sides, pieces, { semiring: integerSemiring }));
+    }
+  });
+
   it('generic semirings (a statistic) fill the table too', () => {
     const pieces = theoryPieceSet('k-theory');
     const region = makeRegion([2, 0, 2, 0, 2, 0]);
