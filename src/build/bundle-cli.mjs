@@ -18,7 +18,7 @@ const outdir = join(root, 'dist', 'cli');
 // Commands bundled with the entry; every other command module is loaded from tsc's dist/cli/commands.
 const BUNDLED = new Set(['count', 'status', 'show', 'expand', 'schema', 'counterexamples', 'replay', 'report', 'merge', 'run-claims']);
 // Bundled modules that use import.meta only for a path valid from both dist/<dir>/ and dist/cli/.
-const LOCATION_FREE = new Set(['src/run/worker-pool.ts']);
+const LOCATION_FREE = new Set(['src/run/worker-pool.ts', 'src/store/open-store.ts']);
 // Files of earlier builds: the ES module chunks the bundle used to be split into, and code caches of other builds.
 const STALE = /^(main-chunk-.*\.js(\.map)?|main-bundle\.[0-9a-f]+\.cache)$/;
 

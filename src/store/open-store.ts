@@ -1,4 +1,5 @@
 import { mkdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { dirname } from 'node:path';
 import Database from 'better-sqlite3';
 import { CodedError } from '../errors/index.js';
@@ -11,6 +12,22 @@ export type Store = Database.Database;
 
 /** Default store file, relative to the working directory. */
 export const DEFAULT_STORE_PATH = 'results/puzzlesweep.sqlite';
+
+// better-sqlite3 finds its addon through the 'bindings' package, which reads a stack trace and probes a dozen
+// paths: 5–10 ms of every store opening. Its usual place (where npm builds or downloads it) is given instead when
+// it is there; otherwise better-sqlite3 searches as before. Resolved from node_modules, so the same from dist/store/
+// and from the CLI's bundle in dist/cli/.
+let addon: string | null | undefined;
+function nativeBinding(): { nativeBinding?: string } {
+  if (addon === undefined) {
+    try {
+      addon = createRequire(import.meta.url).resolve('better-sqlite3/build/Release/better_sqlite3.node');
+    } catch {
+      addon = null;
+    }
+  }
+  return addon ? { nativeBinding: addon } : {};
+}
 
 function schemaVersion(db: Store): number {
   db.exec('CREATE TABLE IF NOT EXISTS schema_version (version INTEGER NOT NULL, applied_at TEXT NOT NULL)');
@@ -57,7 +74,7 @@ export function openStore(path: string, options: { readonly?: boolean; upgrade?:
   let db: Store | undefined;
   try {
     if (!options.readonly) mkdirSync(dirname(path), { recursive: true });
-    db = new Database(path, { readonly: options.readonly ?? false, fileMustExist: options.readonly ?? false });
+    db = new Database(path, { readonly: options.readonly ?? false, fileMustExist: options.readonly ?? false, ...nativeBinding() });
     db.pragma('busy_timeout = 10000');
     db.pragma('foreign_keys = ON');
     // Reading the schema is the first real read: a file that is not SQLite fails here, before anything is written.
