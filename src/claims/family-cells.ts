@@ -99,6 +99,30 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     return list;
   }
 
+  // A string's rank within its content: its place in the content's list.
+  const ranks = new WeakMap<object, Map<string, number>>();
+  function rankOf(content: Content, s: string): number {
+    let m = ranks.get(content);
+    if (!m) {
+      m = new Map(stringsOf(content).map((x, r) => [x, r]));
+      ranks.set(content, m);
+    }
+    return m.get(s) ?? Number(rankString([...s].map((ch) => alphabet.indexOf(ch)), content.counts));
+  }
+
+  // T(b)'s side j for each candidate of side from_j (reversed and renamed), once per candidate list.
+  const imageLists = new WeakMap<object, Map<number, string[]>>();
+  function imagesOf(cls: SizeClass, candidates: readonly string[][]): string[][] {
+    return sideMap.map((s, j) => {
+      const list = candidates[s.from]!;
+      let byMap = imageLists.get(list);
+      if (!byMap) imageLists.set(list, (byMap = new Map()));
+      let images = byMap.get(j);
+      if (!images) byMap.set(j, (images = list.map((x) => applySideMap([{ ...s, from: 0 }], [cls.lengths[s.from]!], [x]).sides[0]!)));
+      return images;
+    });
+  }
+
   function candidatesOf(layout: Layout, contents: readonly number[]): string[][] {
     const candidates: string[][] = [[], [], [], [], [], []];
     layout.groups.forEach((g, gi) => {
@@ -239,7 +263,7 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     const candidates = candidatesOf(layout, contents);
     const leftStride = own.stride;
     // T(b) side j is side from_j of b, reversed and renamed: map each candidate once.
-    const images = sideMap.map((s) => candidates[s.from]!.map((x) => applySideMap([{ ...s, from: 0 }], [cls.lengths[s.from]!], [x]).sides[0]!));
+    const images = imagesOf(cls, candidates);
     const lengths = sideMap.map((s) => cls.lengths[s.from]!);
     const target = targetCell(layout, lengths, cls.lengths, images);
     const partnerCoef = new Float64Array(6);
@@ -301,7 +325,7 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
           const c = contentOf(s);
           if (c < 0) return undefined;
           const content = g.contents[c]!;
-          const rank = Number(rankString([...s].map((ch) => alphabet.indexOf(ch)), content.counts));
+          const rank = rankOf(content, s);
           if (g.sides.length === 1) ranks[d] = Number(content.offset) + rank;
           else {
             // the sides of a group share one content (the cell's)

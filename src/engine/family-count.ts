@@ -217,8 +217,19 @@ function genericTables<T>(plan: KernelPlan, semiring: Semiring<T>, weights: read
 export function countFamily<T>(region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet, options: CountOptions<T>): FamilyTable<T> {
   if (candidates.length !== 6) throw new CodedError('invalid_boundary', { what: 'Family candidates', expected: '6 lists', received: `${candidates.length}` }, { path: 'candidates' });
   const filler = pieces.boundaryLabels[0]!;
+  const allowed = new Set(pieces.boundaryLabels);
   candidates.forEach((list, k) => {
-    for (const s of list) checkBoundary(region, region.lengths.map((len, j) => (j === k ? s : filler.repeat(len))), pieces);
+    for (const s of list) {
+      // A candidate of the right length in boundary labels passes; checkBoundary words the error of any other.
+      let length = 0;
+      let labels = true;
+      for (const ch of s) {
+        length++;
+        labels &&= allowed.has(ch);
+      }
+      if (labels && length === region.lengths[k]) continue;
+      checkBoundary(region, region.lengths.map((len, j) => (j === k ? s : filler.repeat(len))), pieces);
+    }
   });
   const plan = kernelPlan(region, pieces);
   if (!plan.fits) throw new CodedError('invalid_region', { what: 'Family region', expected: 'profiles below 2^53', received: `side lengths ${region.lengths.join(',')}` }, { path: 'lengths', hint: 'count these boundaries one by one' });
