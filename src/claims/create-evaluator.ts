@@ -194,7 +194,7 @@ export function createEvaluator(claimOrProgram: Claim | ClaimProgram, options: E
     };
   };
 
-  const scanner = (tuning.bulk ?? true) ? familyScanner({ program, plan, involutive, sameTheory, exact: options.exact }) : undefined;
+  const scanner = (tuning.bulk ?? true) ? familyScanner({ program, plan, involutive, sameTheory, exact: options.exact, substitutionOf: (cls) => classOf(cls.key).sigma }) : undefined;
   return {
     evaluate: (instance) => run(instance, options.exact, false),
     confirm: (instance) => run(instance, true, true),

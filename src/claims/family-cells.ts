@@ -68,6 +68,12 @@ export interface LeftTable {
  */
 export type FamilyValues = (region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet) => Float64Array | null;
 
+/** T(b)'s values under a substitution σ: class cells' tables, and a builder for images outside the class. */
+export interface RightValues {
+  readonly of: (contents: readonly number[]) => LeftTable | undefined;
+  readonly values: FamilyValues;
+}
+
 /** Builders of a claim's cells: left tables (private or in shared memory) and the cell that compares b with T(b). */
 export function familyCells(program: ClaimProgram, values: FamilyValues | Semiring<SafeInt>, sameTheory: boolean) {
   // An integer semiring: its values as they are, while every one is a safe integer.
@@ -138,11 +144,12 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     return candidates;
   }
 
-  function leftTable(cls: SizeClass, layout: Layout, contents: readonly number[]): LeftTable | undefined {
+  // `valuesOf`: another table builder for the same boundaries (the right side's values under a substitution σ).
+  function leftTable(cls: SizeClass, layout: Layout, contents: readonly number[], valuesOf: FamilyValues = familyValues): LeftTable | undefined {
     return guarded(() => {
       const candidates = candidatesOf(layout, contents);
       if (candidates.reduce((p, l) => p * l.length, 1) > MAX_CELL) return undefined;
-      const values = familyValues(makeRegion(cls.lengths), candidates, program.left);
+      const values = valuesOf(makeRegion(cls.lengths), candidates, program.left);
       return values ? { values, stride: strides(candidates.map((l) => l.length)) } : undefined;
     });
   }
@@ -247,10 +254,14 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     return { values: parts.values, stride: strides(parts.counts) };
   }
 
-  function buildCell(cls: SizeClass, layout: Layout, contents: readonly number[], leftOf: (c: readonly number[]) => LeftTable | undefined): Cell {
+  /**
+   * `right`: T(b)'s values when they are not b's own kind of value (under a substitution σ): the table of
+   * a class cell, and the builder for images outside the class. By default both sides read the left tables.
+   */
+  function buildCell(cls: SizeClass, layout: Layout, contents: readonly number[], leftOf: (c: readonly number[]) => LeftTable | undefined, right?: RightValues): Cell {
     const own = leftOf(contents);
     if (!own) return NOT_TABULATED;
-    return guarded(() => tabulate(cls, layout, contents, own, leftOf)) ?? NOT_TABULATED;
+    return guarded(() => tabulate(cls, layout, contents, own, right?.of ?? leftOf, right?.values ?? familyValues)) ?? NOT_TABULATED;
   }
 
   function tabulate(
@@ -258,7 +269,8 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     layout: Layout,
     contents: readonly number[],
     own: LeftTable,
-    leftOf: (c: readonly number[]) => LeftTable | undefined,
+    rightOf: (c: readonly number[]) => LeftTable | undefined,
+    rightValues: FamilyValues,
   ): Cell | undefined {
     const candidates = candidatesOf(layout, contents);
     const leftStride = own.stride;
@@ -290,12 +302,12 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
     }
     if (target && sameTheory) {
       // T(b) lies in this class: its values are a cell of the same left tables.
-      const other = leftOf(target.contents);
+      const other = rightOf(target.contents);
       if (!other) return undefined;
       return { ok: true, left: own.values, leftStride, right: other.values, rightStride: other.stride, rankMap: target.rankMap, inClass: true, partnerBase, partnerCoef, entries: 0, inner: new Map() };
     }
     // Another theory or outside the class: a table of the images themselves, read by b's own digits (no pairing then).
-    const right = familyValues(makeRegion(lengths), images, program.right);
+    const right = rightValues(makeRegion(lengths), images, program.right);
     if (!right) return undefined;
     const identity = images.map((list) => Int32Array.from(list, (_, d) => d));
     return { ok: true, left: own.values, leftStride, right, rightStride: strides(images.map((l) => l.length)), rankMap: identity, inClass: false, partnerBase, partnerCoef, entries: right.length, inner: new Map() };

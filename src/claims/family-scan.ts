@@ -1,11 +1,12 @@
 import { fillingCountSemiring, integerSemiring, type SafeInt, type Semiring } from '../engine/index.js';
 import type { ScanTally, SharedTables, SizeClass } from './claim-api.js';
 import type { ClaimProgram } from './compile-claim-program.js';
-import { familyCells, NOT_TABULATED, type Ahead, type Cell, type FamilyValues, type InnerSums, type LeftTable, type SharedView } from './family-cells.js';
+import { familyCells, NOT_TABULATED, type Ahead, type Cell, type FamilyValues, type InnerSums, type LeftTable, type RightValues, type SharedView } from './family-cells.js';
 import type { ClaimPlanExt } from './plan-claim.js';
 import { TABLE_PARTS, tableShape } from './shared-tables.js';
 import { residueScannable, residueTables, type ClassBounds } from './residue-tables.js';
 import { applySideMap } from './side-map.js';
+import { isInvolution, type Permutation } from './substitution.js';
 
 /** The bulk path of a sweep: integer values of a whole class from value tables, compared by index arithmetic. */
 export interface FamilyScanner {
@@ -26,6 +27,8 @@ export interface ScanSetup {
   readonly sameTheory: boolean;
   /** Exact values only (--exact): modular comparisons are not scanned. */
   readonly exact: boolean;
+  /** The class's substitution σ (equalAfterSubstitution), as the evaluator takes it; undefined for none or the identity. */
+  readonly substitutionOf?: (cls: SizeClass) => Permutation | undefined;
 }
 
 // Table entries kept per worker (8 bytes each): the 6×6 parallelogram family needs 0.85 M per theory.
@@ -80,6 +83,9 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     const layout = plan.layoutOf(cls);
     if (layout.count > BigInt(Number.MAX_SAFE_INTEGER)) return false;
     let bound: ClassBounds | undefined;
+    const sigma = residues ? setup.substitutionOf?.(cls) : undefined;
+    // Under σ, {b, T(b)} is one pair only when σ is an involution too (the evaluator's rule).
+    const pairs = involutive && (sigma === undefined || isInvolution(sigma));
     if (residues) {
       if (!bounds.has(cls.key)) bounds.set(cls.key, residues.classBounds(cls.lengths, applySideMap(sideMap, cls.lengths, cls.lengths.map(() => '')).lengths));
       bound = bounds.get(cls.key);
@@ -120,11 +126,26 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       }
       return lefts.get(key);
     };
+    // T(b) compared after σ: its values are swept at the σ-moved point, in this worker's own tables.
+    const substituted: RightValues | undefined = sigma
+      ? {
+          values: residues!.tableFor(sigma),
+          of: (contents) => {
+            const key = `σ|${cls.key}|${contents.join(',')}`;
+            if (!lefts.has(key)) {
+              const t = leftTable(cls, layout, contents, residues!.tableFor(sigma));
+              remember(t?.values.length ?? 0);
+              lefts.set(key, t);
+            }
+            return lefts.get(key);
+          },
+        }
+      : undefined;
     const cellOf = (contents: readonly number[]): Cell => {
       const key = `${cls.key}|${contents.join(',')}`;
       let cell = cells.get(key);
       if (!cell) {
-        cell = buildCell(cls, layout, contents, leftOf);
+        cell = buildCell(cls, layout, contents, leftOf, substituted);
         remember(cell.entries);
         cells.set(key, cell);
       }
@@ -268,7 +289,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       const at = baseAt + atSum[r]!;
       const partner = basePartner + partnerSum[r]!;
       let pairable = false;
-      if (involutive && inClass) {
+      if (pairs && inClass) {
         if (partner < i) {
           tally.checked++;
           tally.paired++;

@@ -1,4 +1,6 @@
-import { countFamily, DEFAULT_PRIMES, modularErrorBound, modularSemiring, residueNormSemiring, type PieceSet, type Region } from '../engine/index.js';
+import { countFamily, DEFAULT_PRIMES, modularErrorBound, modularSemiring, residueNormSemiring, type PieceSet, type Region, type ResidueNormSemiring } from '../engine/index.js';
+import type { FamilyValues } from './family-cells.js';
+import type { Permutation } from './substitution.js';
 import type { ClaimProgram } from './compile-claim-program.js';
 import { MAX_MODULAR_ERROR } from './compare-values.js';
 import { Meter, MODULAR_SEED } from './measure.js';
@@ -22,7 +24,9 @@ const NORM_LIMIT = Math.floor((Math.min(P1, P2) - 2) / 2);
 /** Whether a claim's modular comparisons can be decided from residue tables: values compared for equality through a side map. */
 export function residueScannable(program: ClaimProgram): boolean {
   if (program.claim.compare.measure.type !== 'value' || !program.polynomial) return false;
-  if (program.formula || !program.sideMap || program.claim.compare.relation.type !== 'equal' || program.relation.substitution || program.relation.searchSpace) return false;
+  // equal, or equal after a fixed substitution σ per class (T(b)'s table is then swept at the σ-moved point)
+  if (program.formula || !program.sideMap || program.relation.searchSpace) return false;
+  if (program.claim.compare.relation.type !== 'equal' && program.claim.compare.relation.type !== 'equalAfterSubstitution') return false;
   return program.left.boundaryLabels.every((a) => a.length === 1);
 }
 
@@ -33,14 +37,25 @@ export interface ClassBounds {
 }
 
 export function residueTables(program: ClaimProgram) {
-  const point = modularSemiring(MODULAR_SEED, SCAN_PRIMES);
-  const semiring = residueNormSemiring(point);
+  // One semiring per substitution: σ moves the point (y_m is read at y_σ(m)), as in the per-instance path.
+  const semirings = new Map<string, ResidueNormSemiring>();
+  const semiringOf = (sigma: Permutation | undefined) => {
+    const key = sigma ? sigma.join(',') : '';
+    let r = semirings.get(key);
+    if (!r) semirings.set(key, (r = residueNormSemiring(modularSemiring(MODULAR_SEED, SCAN_PRIMES, sigma ? (i) => sigma[i - 1] ?? i : undefined))));
+    return r;
+  };
   const measure = program.claim.compare.measure;
   const left = new Meter(program.left, measure, program.names, 1);
   const right = new Meter(program.right, measure, program.names, 1);
 
-  /** Codes of every boundary of a product family (countFamily's order), or null when they cannot be had. */
-  function table(region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet): Float64Array | null {
+  /** Codes of every boundary of a product family (countFamily's order), or null when they cannot be had; with σ, of σ(value). */
+  const tableFor =
+    (sigma?: Permutation): FamilyValues =>
+    (region, candidates, pieces) =>
+      codes(region, candidates, pieces, semiringOf(sigma));
+
+  function codes(region: Region, candidates: readonly (readonly string[])[], pieces: PieceSet, semiring: ResidueNormSemiring): Float64Array | null {
     const t = countFamily(region, candidates, pieces, { semiring });
     const lanes = t.residues;
     if (!lanes || t.lanes !== 3) return null;
@@ -65,5 +80,5 @@ export function residueTables(program: ClaimProgram) {
     return holds <= MAX_MODULAR_ERROR && zero <= MAX_MODULAR_ERROR ? { holds, zero } : undefined;
   }
 
-  return { table, classBounds };
+  return { table: tableFor(), tableFor, classBounds };
 }

@@ -57,11 +57,24 @@ const parallelogramExchange = written('parallelogram-exchange.json', {
   compare: { measure: { type: 'value' }, relation: { type: 'equal' } },
 });
 
+// Equal after a substitution σ of y: T(b)'s residues are taken at the σ-moved point. σ an involution
+// (a block reversal, with an exchange: pairs) and not (rotation by 120°, σ a reversal then a shift: no pairs).
+const exchangeReversesBlock = written('exchange-reverses-block.json', {
+  id: 'equivariant-exchange-reverses-block',
+  statement: 'Exchanging sides 1 and 4 of an equivariant parallelogram reverses the first block of y.',
+  theory: 'equivariant',
+  family: { sides: ['a', 0, 'b', 'a', 0, 'b'], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }], conditions: [{ type: 'sameContent', sides: [1, 4] }] },
+  transform: [{ type: 'exchange', sides: [1, 4] }],
+  compare: { measure: { type: 'value' }, relation: { type: 'equalAfterSubstitution', substitution: [{ type: 'reverseBlock', from: 1, to: 'a' }] } },
+});
+
 const cases: [string, string][] = [
   // shipped: Laurent values in t from a piece file (fails at a ≥ 2, per its statement)
   ['equivariant-k-exchange', 'conjectures/equivariant-k-parallelogram-exchange.json'],
   ['triangle-exchange', triangleExchange],
   ['parallelogram-exchange-nonzero', parallelogramExchange],
+  ['exchange-reverses-block', exchangeReversesBlock],
+  ['rotation-substitution', 'test/fixtures/claims/valid/equivariant-rotation-substitution.json'],
 ];
 
 describe('a modular sweep stores the verdicts and counts of an exact one', () => {
@@ -85,7 +98,7 @@ describe('a modular sweep stores the verdicts and counts of an exact one', () =>
   });
 
   it('the comparison can fail: the false claims store counterexamples, confirmed exactly', () => {
-    for (const name of ['equivariant-k-exchange', 'parallelogram-exchange-nonzero']) {
+    for (const name of ['equivariant-k-exchange', 'parallelogram-exchange-nonzero', 'exchange-reverses-block', 'rotation-substitution']) {
       const n = query<{ n: number }>(join(dir, `${name}-modular.sqlite`), 'SELECT count(*) AS n FROM counterexamples')[0]!.n;
       expect(n, name).toBeGreaterThan(0);
     }
