@@ -1,4 +1,5 @@
 import type { Store } from './open-store.js';
+import { preparedStatement } from './prepared-statement.js';
 
 export type SweepMethod = 'exact' | 'modular';
 
@@ -49,16 +50,10 @@ export class ChunkLeaser {
     private readonly req: Omit<LeaseRequest, 'from' | 'size'>,
   ) {
     // The unary + keeps SQLite on the rowid range (rows added since) rather than the class's index.
-    this.newRows = db
-      .prepare(`SELECT chunk_id, start_index, end_index FROM chunks WHERE chunk_id > ? AND +fingerprint = ? AND +class_key = ? AND ${BLOCKING}`)
-      .safeIntegers(true);
-    this.allRows = db
-      .prepare(`SELECT start_index, end_index FROM chunks WHERE fingerprint = ? AND class_key = ? AND ${BLOCKING} ORDER BY start_index`)
-      .safeIntegers(true);
-    this.maxId = db.prepare(`SELECT COALESCE(MAX(chunk_id), 0) AS m FROM chunks`);
-    this.insert = db.prepare(
-      `INSERT INTO chunks (fingerprint, class_key, method, start_index, end_index, state, run_id) VALUES (?, ?, ?, ?, ?, 'leased', ?)`,
-    );
+    this.newRows = preparedStatement(db, `SELECT chunk_id, start_index, end_index FROM chunks WHERE chunk_id > ? AND +fingerprint = ? AND +class_key = ? AND ${BLOCKING}`, true);
+    this.allRows = preparedStatement(db, `SELECT start_index, end_index FROM chunks WHERE fingerprint = ? AND class_key = ? AND ${BLOCKING} ORDER BY start_index`, true);
+    this.maxId = preparedStatement(db, `SELECT COALESCE(MAX(chunk_id), 0) AS m FROM chunks`);
+    this.insert = preparedStatement(db, `INSERT INTO chunks (fingerprint, class_key, method, start_index, end_index, state, run_id) VALUES (?, ?, ?, ?, ?, 'leased', ?)`);
     this.reload();
   }
 
@@ -141,13 +136,12 @@ export function classCoverage(
   count: bigint,
 ): { complete: boolean; method: SweepMethod; errorBound: number } {
   const scan = (methods: readonly SweepMethod[]) => {
-    const rows = db
-      .prepare(
-        `SELECT start_index, end_index, error_bound FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'done'
+    const rows = preparedStatement(
+      db,
+      `SELECT start_index, end_index, error_bound FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'done'
          AND method IN (${methods.map(() => '?').join(',')}) ORDER BY start_index`,
-      )
-      .safeIntegers(true)
-      .all(fingerprint, classKey, ...methods) as { start_index: bigint; end_index: bigint; error_bound: number }[];
+      true,
+    ).all(fingerprint, classKey, ...methods) as { start_index: bigint; end_index: bigint; error_bound: number }[];
     let cursor = 0n;
     let errorBound = 0;
     for (const r of rows) {
@@ -179,7 +173,7 @@ export function doneInstances(db: Store, fingerprint: string, classKey: string, 
 
 /** Leased chunks of a class held by runs other than `runId` (live peers once dead runs are reaped). */
 export function otherLeases(db: Store, fingerprint: string, classKey: string, runId: number): number {
-  const row = db.prepare(`SELECT COUNT(*) AS n FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'leased' AND run_id != ?`).get(fingerprint, classKey, runId) as { n: number };
+  const row = preparedStatement(db, `SELECT COUNT(*) AS n FROM chunks WHERE fingerprint = ? AND class_key = ? AND state = 'leased' AND run_id != ?`).get(fingerprint, classKey, runId) as { n: number };
   return row.n;
 }
 

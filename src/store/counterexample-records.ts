@@ -1,5 +1,6 @@
 import type { Measured } from '../claims/claim-api.js';
 import type { Store } from './open-store.js';
+import { preparedStatement } from './prepared-statement.js';
 
 /** A counterexample confirmed with exact arithmetic, as stored and as read back. */
 export interface CounterexampleRecord {
@@ -147,5 +148,5 @@ export function recordPartner(db: Store, fingerprint: string, classKey: string, 
 
 /** A class holds a stored counterexample that was not overturned by a re-check. */
 export function classHasCounterexample(db: Store, fingerprint: string, classKey: string): boolean {
-  return db.prepare(`SELECT 1 FROM counterexamples WHERE fingerprint = ? AND class_key = ? AND (recheck IS NULL OR recheck = 'fails') LIMIT 1`).get(fingerprint, classKey) !== undefined;
+  return preparedStatement(db, `SELECT 1 FROM counterexamples WHERE fingerprint = ? AND class_key = ? AND (recheck IS NULL OR recheck = 'fails') LIMIT 1`).get(fingerprint, classKey) !== undefined;
 }

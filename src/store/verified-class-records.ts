@@ -1,5 +1,6 @@
 import type { SweepMethod } from './chunk-records.js';
 import type { Store } from './open-store.js';
+import { preparedStatement } from './prepared-statement.js';
 
 /** A class fully swept with no counterexample; `instances` is its size. */
 export interface VerifiedClass {
@@ -14,7 +15,8 @@ export interface VerifiedClass {
 
 /** Records a verified class (idempotent per claim, class and method). */
 export function markVerified(db: Store, fingerprint: string, runId: number, v: VerifiedClass): void {
-  db.prepare(
+  preparedStatement(
+    db,
     `INSERT OR REPLACE INTO verified_classes (fingerprint, class_key, method, size, lengths, variables, instances, error_bound, verified_run, verified_at)
      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
   ).run(fingerprint, v.classKey, v.method, v.size, JSON.stringify(v.lengths), JSON.stringify(v.variables), v.instances, v.errorBound, runId, new Date().toISOString());
