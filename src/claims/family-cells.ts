@@ -33,7 +33,10 @@ export interface InnerSums {
   readonly partner: Float64Array;
 }
 
-export const NOT_TABULATED: Cell = { ok: false, left: new Float64Array(0), leftStride: new Float64Array(6), right: new Float64Array(0), rightStride: new Float64Array(6), rankMap: [], inClass: false, partnerBase: 0, partnerCoef: new Float64Array(6), entries: 0, inner: new Map() };
+// Six per-side maps in a packed array (filled in side order), so every cell's rankMap has one shape for the scan's JIT.
+const sixMaps = (): Int32Array[] => Array.from({ length: 6 }, () => new Int32Array(0));
+
+export const NOT_TABULATED: Cell = { ok: false, left: new Float64Array(0), leftStride: new Float64Array(6), right: new Float64Array(0), rightStride: new Float64Array(6), rankMap: sixMaps(), inClass: false, partnerBase: 0, partnerCoef: new Float64Array(6), entries: 0, inner: new Map() };
 
 // A cell larger than this is left to the per-instance path.
 const MAX_CELL = 1 << 24;
@@ -322,7 +325,7 @@ export function familyCells(program: ClaimProgram, values: FamilyValues | Semiri
       return c;
     };
     const contents: number[] = [];
-    const rankMap: Int32Array[] = [];
+    const rankMap = sixMaps();
     for (const g of layout.groups) {
       const contentOf = (s: string) => {
         const counts = countsOf(s);

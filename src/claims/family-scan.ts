@@ -5,6 +5,7 @@ import { familyCells, NOT_TABULATED, type Ahead, type Cell, type FamilyValues, t
 import type { ClaimPlanExt } from './plan-claim.js';
 import { TABLE_PARTS, tableShape } from './shared-tables.js';
 import { residueScannable, residueTables, type ClassBounds } from './residue-tables.js';
+import { NEED_CELL, NEED_FALLBACK, NEED_SUMS, outerKeyAt, scanRange, type ScanRange } from './scan-range.js';
 import { applySideMap } from './side-map.js';
 import { isInvolution, type Permutation } from './substitution.js';
 
@@ -43,12 +44,6 @@ function integerScannable(program: ClaimProgram): boolean {
   const integer = measure === 'puzzles' || (measure === 'value' && !program.polynomial);
   if (!integer || program.formula || !program.sideMap || program.claim.compare.relation.type !== 'equal' || program.relation.substitution || program.relation.searchSpace) return false;
   return program.left.boundaryLabels.every((a) => a.length === 1);
-}
-
-// A decision from residue codes, as the per-instance path tallies a modular result.
-function modular(tally: ScanTally, bound: number): void {
-  tally.errorBound = (tally.errorBound ?? 0) + bound;
-  tally.exact = false;
 }
 
 /** The bulk scanner of a claim, or undefined when it is not `scannable` (or its comparison is modular and the run exact). */
@@ -109,8 +104,9 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       sides: g.sides,
       single: g.sides.length === 1,
       size: Number(g.size),
-      offsets: [...g.contents.map((c) => Number(c.offset)), Number(g.size)],
-      strings: g.contents.map((c) => Number(c.strings)),
+      // typed arrays: one shape whatever the values, so the scan's optimized code is not thrown away per class
+      offsets: Float64Array.from([...g.contents.map((c) => Number(c.offset)), Number(g.size)]),
+      strings: Float64Array.from(g.contents, (c) => Number(c.strings)),
     }));
     // A worker that would wait for another's part computes an unclaimed one instead: first the cells of this
     // chunk (from those of its first outer digits, in key order = index order of the outer groups), then the
@@ -152,9 +148,7 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       return cell;
     };
     const digit = new Int32Array(6);
-    const contents = new Array<number>(groups.length).fill(0);
-    let cellKey = -1;
-    let cell = NOT_TABULATED;
+    const contents = Array.from({ length: groups.length }, () => 0);
     const from = sideMap.map((s) => s.from);
     // The least significant group changes with every index; the others (and their sums) only every L.size.
     const last = groups.length - 1;
@@ -165,20 +159,6 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
     const innerK = sides.filter(innerSide);
     const outerJ = sides.filter((j) => !innerSide(from[j]!));
     const innerJ = sides.filter((j) => innerSide(from[j]!));
-    let outer = -1;
-    let outerKey = 0;
-    let stale = true;
-    let baseOwn = 0;
-    let baseAt = 0;
-    let basePartner = 0;
-    const none: Float64Array<ArrayBufferLike> = new Float64Array(0);
-    let sums: InnerSums = { own: none, at: none, partner: none };
-    let ownSum = none;
-    let atSum = none;
-    let partnerSum = none;
-    let left = none;
-    let right = none;
-    let inClass = false;
     // Per cell, for every position r inside the last group's content: that group's sides' terms of the
     // three sums (b's table index, T(b)'s table index, T(b)'s class index), so a position costs three reads.
     const innerSums = (cell: Cell, c: number): InnerSums => {
@@ -217,135 +197,17 @@ export function familyScanner(setup: ScanSetup): FamilyScanner | undefined {
       cell.inner.set(c, sumsOf);
       return sumsOf;
     };
-    for (let i = Number(start), e = Number(end); i < e; i++) {
-      // Unrank i: mixed radix over groups (least significant last), then ranks within the group's content.
-      let r = i % L.size;
-      const q = (i - r) / L.size;
-      if (q !== outer) {
-        outer = q;
-        stale = true;
-        let rest = q;
-        outerKey = 0;
-        let scale = 1;
-        for (let g = last - 1; g >= 0; g--) {
-          const G = groups[g]!;
-          let x = rest % G.size;
-          rest = (rest - x) / G.size;
-          if (G.single) {
-            digit[G.sides[0]!] = x;
-            contents[g] = 0;
-          } else {
-            let c = 0;
-            while (x >= G.offsets[c + 1]!) c++;
-            x -= G.offsets[c]!;
-            contents[g] = c;
-            outerKey += c * scale;
-            const n = G.strings[c]!;
-            for (let k = G.sides.length - 1; k >= 0; k--) {
-              const y = x % n;
-              digit[G.sides[k]!] = y;
-              x = (x - y) / n;
-            }
-          }
-          scale *= G.strings.length;
-        }
-      }
-      let c = 0;
-      if (!L.single) {
-        while (r >= L.offsets[c + 1]!) c++;
-        r -= L.offsets[c]!;
-      }
-      contents[last] = c;
-      const key = outerKey * L.strings.length + c;
-      if (key !== cellKey) {
-        cell = cellOf(contents);
-        cellKey = key;
-        stale = true;
-      }
-      if (!cell.ok) {
-        fallback(BigInt(i));
-        continue;
-      }
-      if (stale) {
-        baseOwn = 0;
-        for (const k of outerK) baseOwn += cell.leftStride[k]! * digit[k]!;
-        baseAt = 0;
-        basePartner = cell.partnerBase;
-        for (const j of outerJ) {
-          const t = cell.rankMap[j]![digit[from[j]!]!]!;
-          baseAt += cell.rightStride[j]! * t;
-          basePartner += cell.partnerCoef[j]! * t;
-        }
-        sums = innerSums(cell, c);
-        ownSum = sums.own;
-        atSum = sums.at;
-        partnerSum = sums.partner;
-        left = cell.left;
-        right = cell.right;
-        inClass = cell.inClass;
-        stale = false;
-      }
-      // r: the position inside the last group's content, whose sides' terms were summed once per cell
-      const at = baseAt + atSum[r]!;
-      const partner = basePartner + partnerSum[r]!;
-      let pairable = false;
-      if (pairs && inClass) {
-        if (partner < i) {
-          tally.checked++;
-          tally.paired++;
-          continue;
-        }
-        pairable = partner > i;
-      }
-      const l = left[baseOwn + ownSum[r]!]!;
-      if (nonzeroOnly && l === 0 && !pairable) {
-        tally.checked++;
-        tally.skippedZero++;
-        if (bound) modular(tally, bound.zero);
-        continue;
-      }
-      if (l !== right[at]) {
-        // A failure (or a zero beside a nonzero partner): the per-instance path builds and confirms its rows.
-        fallback(BigInt(i));
-        continue;
-      }
-      const both = pairable ? 2 : 1;
-      tally.checked++;
-      if (bound) modular(tally, bound.holds);
-      if (nonzeroOnly && l === 0) tally.skippedZero += both;
-      else {
-        tally.holds += both;
-        if (l === 0) tally.vacuous += both;
-        else tally.nonzero += both;
-      }
+    const range: ScanRange = { groups, digit, contents, from, outerK, outerJ, involutive: pairs, nonzeroOnly, bound, cell: NOT_TABULATED, cellKey: -1, need: 0, key: 0, c: 0 };
+    for (let i = Number(start), e = Number(end); i < e; ) {
+      i = scanRange(range, i, e, tally);
+      if (range.need === NEED_CELL) {
+        range.cell = cellOf(contents);
+        range.cellKey = range.key;
+      } else if (range.need === NEED_SUMS) innerSums(range.cell, range.c);
+      else if (range.need === NEED_FALLBACK) fallback(BigInt(i++));
     }
     return true;
   };
 
   return { scan };
-}
-
-interface GroupDigits {
-  readonly sides: readonly number[];
-  readonly single: boolean;
-  readonly size: number;
-  readonly offsets: readonly number[];
-  readonly strings: readonly number[];
-}
-
-// The cell key of the outer groups (all but the last) at outer index q: mixed radix of their content indices.
-function outerKeyAt(groups: readonly GroupDigits[], q: number): number {
-  let rest = Math.floor(q);
-  let key = 0;
-  let scale = 1;
-  for (let g = groups.length - 2; g >= 0; g--) {
-    const G = groups[g]!;
-    let x = rest % G.size;
-    rest = (rest - x) / G.size;
-    let c = 0;
-    if (!G.single) while (x >= G.offsets[c + 1]!) c++;
-    key += c * scale;
-    scale *= G.strings.length;
-  }
-  return key;
 }
