@@ -74,6 +74,9 @@ async function sweepAll(input: SweepInput, began: number, runner: (threads: numb
   }
   const options = { ...given, workers: workerThreads(given.workers, plans, given.max) };
   const pool = await runner(options.workers);
+  // The threads compile the first claim while this thread opens the store.
+  const first = input.claims[0];
+  if (first) pool.prepare?.({ kind: 'prepare', attempt: 0, runtimeModule: input.runtimeModule, canonicalJson: first.canonicalJson, fingerprint: first.fingerprint, exact: options.exact, max: options.max });
   const db = openStore(options.db);
   const deadline = options.timeLimit !== undefined ? began + options.timeLimit * 1000 : undefined;
   const claims: ClaimSummary[] = [];

@@ -84,6 +84,7 @@ function recordCompileCounts(): void {
 export default async function runWorkerTask(task: WorkerTask): Promise<WorkerReply> {
   try {
     const l = await load(task);
+    if (task.kind === 'prepare') return { ok: true, prepared: true };
     // Two tasks may be queued on this thread (worker-pool.ts): yield once, so the one before this has posted
     // its reply before this one's synchronous work begins.
     await new Promise<void>((resolve) => setImmediate(resolve));

@@ -3,7 +3,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Piscina } from 'piscina';
 import { CodedError } from '../errors/index.js';
-import type { WorkerReply, WorkerTask } from './worker-task.js';
+import type { PrepareTask, WorkerReply, WorkerTask } from './worker-task.js';
 
 /** How often a task is tried before the run gives up with `worker_crashed`. */
 export const MAX_ATTEMPTS = 3;
@@ -26,6 +26,8 @@ export interface TaskRunner {
   readonly size: number;
   crashes: number;
   run(task: WorkerTask, what: string): Promise<WorkerReply>;
+  /** Threads only: load a claim's runtime ahead of its first task. */
+  prepare?(task: PrepareTask): void;
   destroy(): Promise<void>;
 }
 
@@ -59,6 +61,12 @@ export class WorkerPool implements TaskRunner {
       cause: last,
       hint: 'the chunk is left unfinished in the store; rerun the same command to resume, or try fewer --workers if memory is short',
     });
+  }
+
+  /** Has every thread load the claim's runtime now (not awaited; a failure shows again on the first chunk). */
+  prepare(task: PrepareTask): void {
+    // Each thread takes one: piscina hands a task to the least busy thread.
+    for (let i = 0; i < this.size; i++) this.pool.run(task).catch(() => undefined);
   }
 
   async destroy(): Promise<void> {

@@ -40,7 +40,12 @@ export interface DerivedPartner {
   readonly row: CounterexampleRecord | undefined;
 }
 
-export type WorkerTask = ChunkTask | ConfirmTask;
+/** Load the claim's runtime (compile the claim, plan its classes) ahead of the first chunk, while the main thread opens the store. */
+export interface PrepareTask extends Omit<TaskBase, 'classKey'> {
+  readonly kind: 'prepare';
+}
+
+export type WorkerTask = ChunkTask | ConfirmTask | PrepareTask;
 
 /** Tallies and findings of one chunk. */
 export interface ChunkResult extends ChunkFindings {
@@ -62,6 +67,7 @@ export interface SerializedError {
 
 export type WorkerReply =
   | { readonly ok: true; readonly chunk: ChunkResult }
+  | { readonly ok: true; readonly prepared: true }
   | {
       readonly ok: true;
       readonly confirmed: readonly { readonly index: bigint; readonly status: 'fails' | 'holds'; readonly left: Measured; readonly right: Measured }[];
