@@ -35,8 +35,12 @@ export function chunkSizeFor(s: ChunkSizing, i: SizingInput): bigint {
   let size = rate !== undefined && rate > 0 ? BigInt(Math.max(1, Math.floor(s.targetMs / rate))) : FIRST_CHUNK;
   if (size > s.max) size = s.max;
   // The tail: with 2 chunks per worker in flight, a share of a quarter of the rest per worker keeps the last chunks short.
-  const share = (i.totalRemaining + BigInt(2 * s.workers) - 1n) / BigInt(2 * s.workers);
-  if (size > share) size = share;
+  // One worker (or the main thread) has no one to finish with: halving its tail only added chunks, each a lease
+  // and a write (a small family's last class went in 9 chunks instead of 2).
+  if (s.workers > 1) {
+    const share = (i.totalRemaining + BigInt(2 * s.workers) - 1n) / BigInt(2 * s.workers);
+    if (size > share) size = share;
+  }
   if (size < s.min) size = s.min;
   if (size > i.classRemaining && i.classRemaining > 0n) size = i.classRemaining;
   return size;

@@ -178,4 +178,9 @@ describe('chunk sizing (common practice, no source)', () => {
     expect(chunkSizeFor(sizing, { perInstanceMs: 0.001, classRemaining: 1000n, totalRemaining: 1000n })).toBe(250n);
     expect(chunkSizeFor(sizing, { perInstanceMs: 0.001, classRemaining: 5n, totalRemaining: 5n })).toBe(5n);
   });
+
+  it('one worker (or the main thread) takes what its measured rate allows up to the class end, with no tail share', () => {
+    // 150 ms at 0.001 ms per instance is 150,000, above the 1,000 left: the whole rest in one chunk (common practice, no source).
+    expect(chunkSizeFor(autoSizing(1), { perInstanceMs: 0.001, classRemaining: 1000n, totalRemaining: 1000n })).toBe(1000n);
+  });
 });
