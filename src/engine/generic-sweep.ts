@@ -74,9 +74,19 @@ export function genericStep<T>(plan: KernelPlan, label: Int32Array, s: number, s
   const owned = new Set<T>();
   const P = plan.pieceCount;
   const addInPlace = semiring.addInPlace?.bind(semiring);
+  const addProduct = addInPlace && semiring.addProductInPlace?.bind(semiring);
   for (const [key, value] of cur) {
     const emit: Emit = (nk, piece) => {
       const w = piece < 0 ? undefined : weights[s * P + piece];
+      if (w !== undefined && addProduct) {
+        const old = next.get(nk);
+        // An owned sum takes value·w directly, with no temporary product.
+        if (old !== undefined && owned.has(old)) {
+          const sum = addProduct(old, value, w);
+          if (semiring.isZero(sum)) next.delete(nk);
+          return;
+        }
+      }
       const v = w === undefined ? value : semiring.mul(value, w);
       if (semiring.isZero(v)) return;
       const old = next.get(nk);
@@ -97,6 +107,7 @@ export function genericStep<T>(plan: KernelPlan, label: Int32Array, s: number, s
     if (backward) forEachBackward(plan, label, s, key, emit);
     else forEachForward(plan, label, s, key, emit);
   }
+  if (semiring.settle) for (const v of owned) semiring.settle(v);
   return next;
 }
 
@@ -133,13 +144,17 @@ export function genericCountFixed<T>(
     hooks.onProgress?.({ done: lo + plan.stepCount - hi, total: plan.stepCount, profiles: f.size + b.size, fromTop: f.size, fromBottom: b.size });
     if (f.size === 0 || b.size === 0) return semiring.zero;
   }
-  let total = semiring.zero;
+  // Σ F(p)·B(p), summed in place where the ring allows (the first product is the sweep's own value).
+  let total: T | undefined;
   const [small, large] = f.size <= b.size ? [f, b] : [b, f];
   for (const [key, x] of small) {
     const y = large.get(key);
-    if (y !== undefined) total = semiring.add(total, semiring.mul(x, y));
+    if (y === undefined) continue;
+    if (total === undefined) total = semiring.mul(x, y);
+    else if (semiring.addProductInPlace && semiring.addInPlace) total = semiring.addProductInPlace(total, x, y);
+    else total = semiring.addInPlace ? semiring.addInPlace(total, semiring.mul(x, y)) : semiring.add(total, semiring.mul(x, y));
   }
-  return total;
+  return total ?? semiring.zero;
 }
 
 /** Forward sweep with side 5 open in any semiring: final line-0 profiles (packed) to values. */

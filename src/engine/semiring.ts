@@ -14,6 +14,10 @@ export interface Semiring<T> {
    * created themselves, so big values (polynomials) are not copied once per contribution.
    */
   addInPlace?(acc: T, b: T): T;
+  /** Optional: acc += a·b in place, on the same terms as `addInPlace` (no temporary product). */
+  addProductInPlace?(acc: T, a: T, b: T): T;
+  /** Optional: called on each value a sweep step built once nothing more is added into it (drops build-time indexes). */
+  settle?(a: T): void;
   mul(a: T, b: T): T;
   isZero(a: T): boolean;
   equals(a: T, b: T): boolean;

@@ -1,6 +1,6 @@
 import type { Semiring, WorkForm } from '../semiring.js';
 import { MonomialTable } from './monomial-table.js';
-import { addBigTerm, addPacked, addPackedInPlace, addTerm, bigAt, mulPacked, packedEquals, PackedPoly } from './packed-polynomial.js';
+import { addBigTerm, addPacked, addPackedInPlace, addProductPacked, addTerm, bigAt, mulPacked, packedEquals, PackedPoly, settlePacked } from './packed-polynomial.js';
 import type { Polynomial } from './polynomial.js';
 
 /** Bytes per term of a packed table (id, coefficient, index slots and growth slack; measured order of magnitude). */
@@ -47,6 +47,8 @@ export function packedForm(outer: Semiring<Polynomial>): PackedForm {
     add: addPacked,
     addInPlace: addPackedInPlace,
     mul: (a, b) => mulPacked(table, a, b),
+    addProductInPlace: (acc, a, b) => addProductPacked(table, acc, a, b),
+    settle: settlePacked,
     isZero: (a) => a.live === 0,
     equals: packedEquals,
     fromInteger: (n) => into(outer.fromInteger(n)),

@@ -37,8 +37,16 @@ function hashSlot(id: number, mask: number): number {
   return (Math.imul(id, 0x9e3779b1) >>> 7) & mask;
 }
 
+const NO_SLOTS = new Int32Array(0);
+
+/** Drops the index (rebuilt on the next lookup): a table's finished values are only read. */
+export function settlePacked(p: PackedPoly): void {
+  p.slots = NO_SLOTS;
+}
+
 /** The entry of monomial `id`, or −1. */
 export function entryOf(p: PackedPoly, id: number): number {
+  if (p.slots.length === 0) rehash(p, slotLength(p.count));
   const slots = p.slots;
   const mask = slots.length - 1;
   for (let h = hashSlot(id, mask); ; h = (h + 1) & mask) {
@@ -50,6 +58,7 @@ export function entryOf(p: PackedPoly, id: number): number {
 
 // The entry of `id`, appended with coefficient 0 when absent.
 function entryFor(p: PackedPoly, id: number): number {
+  if (p.slots.length === 0) rehash(p, slotLength(p.count + 1));
   let slots = p.slots;
   let mask = slots.length - 1;
   let h = hashSlot(id, mask);
@@ -183,9 +192,13 @@ export function addPacked(a: PackedPoly, b: PackedPoly): PackedPoly {
 /** a·b; monomial products through `table`. */
 export function mulPacked(table: MonomialTable, a: PackedPoly, b: PackedPoly): PackedPoly {
   if (a.live === 0 || b.live === 0) return new PackedPoly(0);
+  return addProductPacked(table, new PackedPoly(Math.min(Math.max(a.count, b.count) * Math.min(a.live, b.live), 1 << 20)), a, b);
+}
+
+/** out += a·b, mutating out (which must be neither a nor b); returns out. */
+export function addProductPacked(table: MonomialTable, out: PackedPoly, a: PackedPoly, b: PackedPoly): PackedPoly {
   // Let the outer loop run over the smaller factor (usually a weight of one or two terms).
   if (a.live < b.live) [a, b] = [b, a];
-  const out = new PackedPoly(Math.min(a.count * b.live, 1 << 20));
   const n = a.count;
   for (let f = 0; f < b.count; f++) {
     if (b.big ? b.big[f] === 0n : b.coefs[f] === 0) continue;
