@@ -1,12 +1,23 @@
-import { addPoly, constantPoly, mulPoly, polyTerms, polyText, variablePoly, type Polynomial } from '../engine/index.js';
+import { addPoly, addPolyInPlace, constantPoly, mulPoly, polyTerms, polyText, variablePoly, type Polynomial } from '../engine/index.js';
 
 /** How an equivariant value is written: in the roots z_m = y_{m+1} − y_m, expanded in y, or with its root factors pulled out. */
 export const VALUE_FORMS = ['roots', 'expanded', 'factored'] as const;
 export type ValueForm = (typeof VALUE_FORMS)[number];
 
 // In the root basis variable 0 is y_1 and variable m (1 ≤ m < N) is z_m; named variables keep their index.
+// A value is shown and written as JSON in the roots, each asking for the rewrite: done once per value.
+const rewritten = new WeakMap<Polynomial, Map<number, Polynomial>>();
+
 /** Rewrites a polynomial in y_1..y_N via y_m = y_1 + z_1 + … + z_{m−1}. */
 export function toRootBasis(p: Polynomial, size: number): Polynomial {
+  let bySize = rewritten.get(p);
+  if (!bySize) rewritten.set(p, (bySize = new Map()));
+  let r = bySize.get(size);
+  if (!r) bySize.set(size, (r = rewrite(p, size)));
+  return r;
+}
+
+function rewrite(p: Polynomial, size: number): Polynomial {
   const power = new Map<string, Polynomial>();
   const ym = (m: number): Polynomial => {
     let s = variablePoly(0);
@@ -22,14 +33,15 @@ export function toRootBasis(p: Polynomial, size: number): Polynomial {
     }
     return v;
   };
-  let out: Polynomial = new Map();
+  // Summed in place: adding each term into a copy would be quadratic in the number of terms.
+  const out: Polynomial = new Map();
   for (const t of polyTerms(p, 0)) {
     let term: Polynomial = constantPoly(t.coefficient);
     t.exponents.forEach((e, k) => {
       if (e === 0) return;
       term = mulPoly(term, k < size ? pow(k + 1, e) : mulPowVar(k, e));
     });
-    out = addPoly(out, term);
+    addPolyInPlace(out, term);
   }
   return out;
 }
@@ -54,8 +66,8 @@ export function rootVariableName(k: number, size: number, names: readonly string
 
 // f = (y_j − y_i)·q + f|_{y_j = y_i}; q collects (y_j^e − y_i^e)/(y_j − y_i) = Σ_{a+b=e−1} y_j^a y_i^b.
 function divideByRoot(f: Polynomial, i: number, j: number): Polynomial | undefined {
-  let rest: Polynomial = new Map();
-  let q: Polynomial = new Map();
+  const rest: Polynomial = new Map();
+  const q: Polynomial = new Map();
   for (const t of polyTerms(f, 0)) {
     const e = [...t.exponents];
     const ej = e[j] ?? 0;
@@ -63,12 +75,12 @@ function divideByRoot(f: Polynomial, i: number, j: number): Polynomial | undefin
     while (restE.length <= Math.max(i, j)) restE.push(0);
     restE[i] = (restE[i] ?? 0) + ej;
     restE[j] = 0;
-    rest = addPoly(rest, monomial(t.coefficient, restE));
+    addPolyInPlace(rest, monomial(t.coefficient, restE));
     for (let a = 0; a < ej; a++) {
       const qe = [...restE];
       qe[i] = (e[i] ?? 0) + (ej - 1 - a);
       qe[j] = a;
-      q = addPoly(q, monomial(t.coefficient, qe));
+      addPolyInPlace(q, monomial(t.coefficient, qe));
     }
   }
   return rest.size === 0 ? q : undefined;
