@@ -27,7 +27,8 @@ export function residueNormSemiring(modular: ModularSemiring): ResidueNormSemiri
     one: join(modular.one, 1),
     add: lift(modular.add, (x, y) => x + y),
     mul: lift(modular.mul, (x, y) => x * y),
-    isZero: (a) => modular.isZero(residues(a)),
+    // Zero only with a zero norm: a sweep dropping zero states must not drop a contribution to the bound.
+    isZero: (a) => modular.isZero(residues(a)) && norm(a) === 0,
     equals: (a, b) => modular.equals(residues(a), residues(b)) && norm(a) === norm(b),
     fromInteger: (n) => join(modular.fromInteger(n), Math.abs(n)),
     variable: (name) => join(modular.variable(name), 1),
