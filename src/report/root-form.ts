@@ -1,4 +1,4 @@
-import { addPoly, addPolyInPlace, constantPoly, mulPoly, polyTerms, polyText, variablePoly, type Polynomial } from '../engine/index.js';
+import { addPolyInPlace, addTermInPlace, constantPoly, mulPoly, polyTerms, polyText, variablePoly, type Polynomial } from '../engine/index.js';
 
 /** How an equivariant value is written: in the roots z_m = y_{m+1} − y_m, expanded in y, or with its root factors pulled out. */
 export const VALUE_FORMS = ['roots', 'expanded', 'factored'] as const;
@@ -17,39 +17,31 @@ export function toRootBasis(p: Polynomial, size: number): Polynomial {
   return r;
 }
 
+// y_m = y_{m−1} + z_{m−1}: substituting x_j ↦ x_{j−1} + x_j for j = N−1 down to 1 (the new x_j is z_j)
+// leaves y_1 + z_1 + … + z_{m−1} in place of every y_m, one binomial expansion per variable; expanding
+// each term's product of powers of sums instead costs far more on values with many terms.
 function rewrite(p: Polynomial, size: number): Polynomial {
-  const power = new Map<string, Polynomial>();
-  const ym = (m: number): Polynomial => {
-    let s = variablePoly(0);
-    for (let l = 1; l < m; l++) s = addPoly(s, variablePoly(l));
-    return s;
-  };
-  const pow = (m: number, e: number): Polynomial => {
-    const key = `${m}^${e}`;
-    let v = power.get(key);
-    if (!v) {
-      v = e === 0 ? constantPoly(1n) : mulPoly(pow(m, e - 1), ym(m));
-      power.set(key, v);
-    }
-    return v;
-  };
-  // Summed in place: adding each term into a copy would be quadratic in the number of terms.
-  const out: Polynomial = new Map();
-  for (const t of polyTerms(p, 0)) {
-    let term: Polynomial = constantPoly(t.coefficient);
-    t.exponents.forEach((e, k) => {
-      if (e === 0) return;
-      term = mulPoly(term, k < size ? pow(k + 1, e) : mulPowVar(k, e));
-    });
-    addPolyInPlace(out, term);
-  }
-  return out;
+  let cur = p;
+  for (let j = size - 1; j >= 1; j--) cur = shiftVariable(cur, j);
+  return cur;
 }
 
-function mulPowVar(k: number, e: number): Polynomial {
-  let v = constantPoly(1n);
-  for (let i = 0; i < e; i++) v = mulPoly(v, variablePoly(k));
-  return v;
+function shiftVariable(p: Polynomial, j: number): Polynomial {
+  const out: Polynomial = new Map();
+  for (const t of polyTerms(p, 0)) {
+    const x = [...t.exponents];
+    while (x.length <= j) x.push(0);
+    const e = x[j]!;
+    const below = x[j - 1]!;
+    let binomial = 1n; // C(e, a)
+    for (let a = 0; a <= e; a++) {
+      x[j - 1] = below + a;
+      x[j] = e - a;
+      addTermInPlace(out, x, t.coefficient * binomial);
+      binomial = (binomial * BigInt(e - a)) / BigInt(a + 1);
+    }
+  }
+  return out;
 }
 
 /** True when every coefficient in the root basis is ≥ 0 and y_1 does not occur (Graham positivity). */

@@ -50,6 +50,13 @@ export function addPolyInPlace(acc: Polynomial, b: Polynomial): Polynomial {
   return m;
 }
 
+/** `acc += c·x^exponents`, mutating `acc` (which must not be shared); returns `acc`. */
+export function addTermInPlace(acc: Polynomial, exponents: readonly number[], c: bigint): Polynomial {
+  if (exponents.some((e) => !Number.isInteger(e) || e < 0 || e > 0xffff)) throw new RangeError(`exponents ${exponents.join(',')} outside 0..65535`);
+  if (c !== 0n) addInto(acc as Map<string, bigint>, monomialKey(exponents), c);
+  return acc;
+}
+
 export function subPoly(a: Polynomial, b: Polynomial): Polynomial {
   return addPoly(a, scalePoly(b, -1n));
 }

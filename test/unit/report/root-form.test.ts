@@ -39,6 +39,18 @@ describe('values in the roots z_m = y_{m+1} − y_m', () => {
     expect(isRootPositive(subPoly(y(1), y(2)), size)).toBe(false); // y1 − y2 = −z1
   });
 
+  it('rewrites high powers and leaves named variables (index ≥ N) alone', () => {
+    // q·(y5 − y1)^4·y3^3 + y2^5 with q = variable 5: the same values at every point (z from y) [evaluation].
+    const q = variablePoly(size);
+    let h = mulPoly(q, mulPoly(mulPoly(root(1, 5), root(1, 5)), mulPoly(root(1, 5), root(1, 5))));
+    h = addPoly(mulPoly(h, mulPoly(y(3), mulPoly(y(3), y(3)))), mulPoly(y(2), mulPoly(mulPoly(y(2), y(2)), mulPoly(y(2), y(2)))));
+    const r5 = toRootBasis(h, size);
+    for (const at of points(size + 1, 40)) {
+      const z = [at[0]!, ...Array.from({ length: size - 1 }, (_, m) => at[m + 1]! - at[m]!), at[size]!];
+      expect(evaluate(r5, z)).toBe(evaluate(h, at));
+    }
+  });
+
   it('pulls out root factors whose product with the cofactor is the polynomial', () => {
     const q = mulPoly(mulPoly(root(1, 3), root(1, 3)), addPoly(root(2, 5), y(4)));
     const { factors, cofactor } = rootFactors(q, size);
