@@ -109,7 +109,7 @@ export default async function modularYardstickBenchmark(): Promise<string> {
       if (one) rows.push(row('`run`, modular, per-instance path', one));
       rows.push(`| ${c.name}: Python, batched family loop | ${p.checked} | ${p.holds} | ${p.checked - p.holds} | exact | 0 | ${s(py.wall)} | ${s(py.cpu)} | ${py.rssMB} |`);
       notes.push(
-        `- ${c.name} (${m.checked} labelings, ${m.counterexamples} counterexamples, each confirmed exactly): modular against Python ${ratio(py.cpu, m.cpu)} in CPU, against --exact ${ratio(e.cpu, m.cpu)}${one ? `, against the modular per-instance path ${ratio(one.cpu, m.cpu)}` : ''}; --exact against Python ${ratio(py.cpu, e.cpu)}.`,
+        `- ${c.name} (${m.checked} labelings, ${m.counterexamples} counterexamples${m.counterexamples ? ', each confirmed exactly' : ''}): modular against Python ${ratio(py.cpu, m.cpu)} in CPU, against --exact ${ratio(e.cpu, m.cpu)}${one ? `, against the modular per-instance path ${ratio(one.cpu, m.cpu)}` : ''}; --exact against Python ${ratio(py.cpu, e.cpu)}.`,
       );
     }
     return [
