@@ -1,6 +1,5 @@
 import { checkBoundary } from './boundary.js';
-import { numericLanes } from './count-kernel.js';
-import { workRing } from './work-ring.js';
+import { genericWeights, numericLanes } from './count-kernel.js';
 
 import { genericStep } from './generic-sweep.js';
 import { BOTTOM_OPEN, kernelPlan, STEP_END, STEP_START, type KernelPlan } from './kernel-plan.js';
@@ -260,12 +259,10 @@ export function countFamily<T>(region: Region, candidates: readonly (readonly st
       if (!(e instanceof NumericOverflow)) throw e;
     }
   }
-  const values = new Array<unknown>(size);
-  const work = workRing(plan, semiring, weigher, cacheable);
-  walkFamily(plan, candidates, genericTables(plan, work.semiring, work.weights, values), size);
-  const read = new Array<T | undefined>(size);
-  const value = (i: number): T => (values[i] === undefined ? semiring.zero : (read[i] ??= work.out(values[i])));
-  return { counts, size, numbers: null, residues: null, lanes: 1, value, indexOf: locate };
+  // Family values are many small ones: the caller's form, no work form (see WORK_FORM_TERMS).
+  const values = new Array<T | undefined>(size);
+  walkFamily(plan, candidates, genericTables(plan, semiring, genericWeights(plan, semiring, weigher, cacheable), values), size);
+  return { counts, size, numbers: null, residues: null, lanes: 1, value: (i) => values[i] ?? semiring.zero, indexOf: locate };
 }
 
 function familyIndex(candidates: readonly (readonly string[])[]): (sides: readonly string[]) => number {

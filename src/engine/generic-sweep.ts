@@ -1,6 +1,7 @@
 import { BOTTOM_OPEN, STEP_END, STEP_START, STEP_UP, type KernelPlan } from './kernel-plan.js';
 import type { SweepHooks, SweepStrategy } from './numeric-kernel.js';
 import type { Semiring } from './semiring.js';
+import { SweepRing, type WorkSwitch } from './work-ring.js';
 
 /**
  * The sweep over packed profiles for any semiring (polynomials, generating polynomials, bigints):
@@ -121,7 +122,10 @@ export function estimateBytes<T>(semiring: Semiring<T>, table: Map<number, T>): 
   return table.size * BYTES_PER_PROFILE + terms * (semiring.termBytes ?? BYTES_PER_TERM);
 }
 
-/** The value of one fixed boundary in any semiring (packed profiles). */
+/**
+ * The value of one fixed boundary in any semiring (packed profiles). With `work`, the sweep moves into
+ * the ring's work form once its tables grow (`SweepRing`); the value returned is in the caller's form.
+ */
 export function genericCountFixed<T>(
   plan: KernelPlan,
   label: Int32Array,
@@ -131,39 +135,48 @@ export function genericCountFixed<T>(
   weights: GenericWeights<T>,
   strategy: SweepStrategy,
   hooks: SweepHooks = {},
+  work?: () => WorkSwitch,
+  workTerms?: number,
 ): T {
-  let f = new Map<number, T>([[initial, semiring.one]]);
-  let b = new Map<number, T>([[target, semiring.one]]);
+  const ring = new SweepRing(semiring as Semiring<unknown>, weights as GenericWeights<unknown>, work, workTerms);
+  let f = new Map<number, unknown>([[initial, semiring.one]]);
+  let b = new Map<number, unknown>([[target, semiring.one]]);
   let lo = 0;
   let hi = plan.stepCount;
   while (lo < hi) {
-    if (strategy === 'forward' || (strategy === 'meet' && f.size <= b.size)) f = genericStep(plan, label, lo++, semiring, weights, f, false);
-    else b = genericStep(plan, label, --hi, semiring, weights, b, true);
+    if (strategy === 'forward' || (strategy === 'meet' && f.size <= b.size)) f = genericStep(plan, label, lo++, ring.semiring, ring.weights, f, false);
+    else b = genericStep(plan, label, --hi, ring.semiring, ring.weights, b, true);
+    [f, b] = ring.settle([f, b]) as [Map<number, unknown>, Map<number, unknown>];
     // The estimate walks every value, so it is taken every fourth step.
-    if (hooks.checkMemory && (lo + plan.stepCount - hi) % 4 === 0) hooks.checkMemory(estimateBytes(semiring, f) + estimateBytes(semiring, b), lo + plan.stepCount - hi);
+    if (hooks.checkMemory && (lo + plan.stepCount - hi) % 4 === 0) hooks.checkMemory(estimateBytes(ring.semiring, f) + estimateBytes(ring.semiring, b), lo + plan.stepCount - hi);
     hooks.onProgress?.({ done: lo + plan.stepCount - hi, total: plan.stepCount, profiles: f.size + b.size, fromTop: f.size, fromBottom: b.size });
     if (f.size === 0 || b.size === 0) return semiring.zero;
   }
   // Σ F(p)·B(p), summed in place where the ring allows (the first product is the sweep's own value).
-  let total: T | undefined;
+  const r = ring.semiring;
+  let total: unknown;
   const [small, large] = f.size <= b.size ? [f, b] : [b, f];
   for (const [key, x] of small) {
     const y = large.get(key);
     if (y === undefined) continue;
-    if (total === undefined) total = semiring.mul(x, y);
-    else if (semiring.addProductInPlace && semiring.addInPlace) total = semiring.addProductInPlace(total, x, y);
-    else total = semiring.addInPlace ? semiring.addInPlace(total, semiring.mul(x, y)) : semiring.add(total, semiring.mul(x, y));
+    if (total === undefined) total = r.mul(x, y);
+    else if (r.addProductInPlace && r.addInPlace) total = r.addProductInPlace(total, x, y);
+    else total = r.addInPlace ? r.addInPlace(total, r.mul(x, y)) : r.add(total, r.mul(x, y));
   }
-  return total ?? semiring.zero;
+  return total === undefined ? semiring.zero : (ring.out(total) as T);
 }
 
-/** Forward sweep with side 5 open in any semiring: final line-0 profiles (packed) to values. */
-export function genericSweepOpen<T>(plan: KernelPlan, label: Int32Array, initial: number, semiring: Semiring<T>, weights: GenericWeights<T>, hooks: SweepHooks = {}): Map<number, T> {
-  let f = new Map<number, T>([[initial, semiring.one]]);
+/** Forward sweep with side 5 open in any semiring: final line-0 profiles (packed) to values (`work` as in `genericCountFixed`). */
+export function genericSweepOpen<T>(plan: KernelPlan, label: Int32Array, initial: number, semiring: Semiring<T>, weights: GenericWeights<T>, hooks: SweepHooks = {}, work?: () => WorkSwitch, workTerms?: number): Map<number, T> {
+  const ring = new SweepRing(semiring as Semiring<unknown>, weights as GenericWeights<unknown>, work, workTerms);
+  let f = new Map<number, unknown>([[initial, semiring.one]]);
   for (let s = 0; s < plan.stepCount; s++) {
-    f = genericStep(plan, label, s, semiring, weights, f, false);
-    if (hooks.checkMemory && s % 4 === 0) hooks.checkMemory(estimateBytes(semiring, f), s + 1);
+    f = genericStep(plan, label, s, ring.semiring, ring.weights, f, false);
+    f = ring.settle([f])[0]!;
+    if (hooks.checkMemory && s % 4 === 0) hooks.checkMemory(estimateBytes(ring.semiring, f), s + 1);
     hooks.onProgress?.({ done: s + 1, total: plan.stepCount, profiles: f.size });
   }
-  return f;
+  const out = new Map<number, T>();
+  for (const [k, v] of f) out.set(k, ring.out(v) as T);
+  return out;
 }

@@ -1,5 +1,5 @@
 import { checkBoundary, reverseString, type Boundary } from './boundary.js';
-import { numericLanes } from './count-kernel.js';
+import { genericWeights, numericLanes } from './count-kernel.js';
 import { defaultStrategy } from './default-strategy.js';
 import { BYTES_PER_PROFILE, BYTES_PER_TERM, genericCountFixed, genericSweepOpen } from './generic-sweep.js';
 import { fillingCountSemiring } from './semirings/integer-semiring.js';
@@ -12,7 +12,7 @@ import { compilePlan, expandStep, type TransferPlan } from './transfer-plan.js';
 import { fitsNumeric, sweepNumeric, type WeightTable } from './transfer-numeric.js';
 import { declaredWeigher, type Weigher } from './weigher.js';
 import { tupleSemiring } from './semirings/tuple-semiring.js';
-import { workRing } from './work-ring.js';
+import { workSwitch } from './work-ring.js';
 import { CodedError } from '../errors/index.js';
 
 export type { ProgressCallback, SweepStrategy } from './numeric-kernel.js';
@@ -32,6 +32,8 @@ export interface CountOptions<T> {
   readonly onProgress?: ProgressCallback;
   /** Stops with `limit_exceeded` once the sweep's tables would hold more than this many bytes (estimated for generic values). */
   readonly memoryLimitBytes?: number;
+  /** Live terms from which a generic sweep moves into its ring's work form (default `WORK_FORM_TERMS`; 0: from the first step). */
+  readonly workFormTerms?: number;
 }
 
 // Weight of each piece on the triangle of each step, looked up once per sweep, with a flag for 1.
@@ -140,9 +142,13 @@ function countOne<T>(region: Region, boundary: Boundary, pieces: PieceSet, optio
       if (!(e instanceof NumericOverflow)) throw e;
     }
   }
-  const work = workRing(plan, semiring, weigher, cacheable);
-  if (options.memoryLimitBytes !== undefined && work.semiring.terms) refuseEarly(plan, label, initial, target, strategy, options.memoryLimitBytes, work.semiring.termBytes ?? BYTES_PER_TERM);
-  return work.out(genericCountFixed(plan, label, initial, target, work.semiring, work.weights, strategy, hooks));
+  const work = workSwitch(plan, semiring, weigher, cacheable);
+  if (options.memoryLimitBytes !== undefined && semiring.terms) {
+    // At least one term per live profile, in the cheaper of the two forms.
+    const termBytes = Math.min(semiring.termBytes ?? BYTES_PER_TERM, work?.().semiring.termBytes ?? BYTES_PER_TERM);
+    refuseEarly(plan, label, initial, target, strategy, options.memoryLimitBytes, termBytes);
+  }
+  return genericCountFixed(plan, label, initial, target, semiring, genericWeights(plan, semiring, weigher, cacheable), strategy, hooks, work, options.workFormTerms);
 }
 
 // A numeric pre-pass visits the same profiles as the generic sweep will; each holds at least one
@@ -199,8 +205,8 @@ export function countCompletions<T>(region: Region, sides: readonly (string | nu
       if (!(e instanceof NumericOverflow)) throw e;
     }
   }
-  const work = workRing(plan, semiring, weigher, cacheable);
-  for (const [key, v] of genericSweepOpen(plan, label, initial, work.semiring, work.weights, hooks)) out.set(side5OfKey(plan, key), work.out(v));
+  const work = workSwitch(plan, semiring, weigher, cacheable);
+  for (const [key, v] of genericSweepOpen(plan, label, initial, semiring, genericWeights(plan, semiring, weigher, cacheable), hooks, work, options.workFormTerms)) out.set(side5OfKey(plan, key), v);
   return out;
 }
 
