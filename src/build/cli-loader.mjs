@@ -31,8 +31,9 @@ const help = args.length === 1 && args[0] === '--help' && !process.env.PUZZLESWE
 if (help !== undefined) process.stdout.write(help);
 else {
   const cachedData = tryRead(`${dir}main-bundle.${BUILD}.cache`);
-  // The CommonJS wrapper on the bundle's first line, so its line numbers stay the bundle's own.
-  const source = `(function (exports, require, module, __filename, __dirname) {${readFileSync(bundle, 'utf8')}\n})`;
+  // The CommonJS wrapper on the bundle's first line, so its line numbers stay the bundle's own. Strict, as the ES
+  // modules it was bundled from (the bundle's own "use strict" follows the build's banner, so it is no directive).
+  const source = `(function (exports, require, module, __filename, __dirname) {'use strict';${readFileSync(bundle, 'utf8')}\n})`;
   const script = new vm.Script(source, { filename: bundle, ...(cachedData ? { cachedData } : {}) });
   const module = { exports: {} };
   // The build's training runs (src/build/bundle-cli.mjs) write the cache: the bundle plus what they compiled.

@@ -37,7 +37,7 @@ function startupSection(dir: string): string[] {
     '|---|---:|---:|---:|---:|',
     ...cases.map(([name], i) => `| ${name} | ${ms(wall[i]!)} | ${ms(wall[i]! - wall[0]!)} | ${ms(cpu[i]!)} | ${ms(cpu[i]! - cpu[0]!)} |`),
     '',
-    'Goal: `--help`, `count` and `status` within 120 ms of `node -e 0`. dist/cli/main.js is an esbuild bundle (src/build/bundle-cli.mjs);',
+    'Goal: `--help`, `count` and `status` within 120 ms of `node -e 0`. dist/cli/main.js is a loader that compiles the CLI, one esbuild bundle, from the V8 code cache the build made (src/build/bundle-cli.mjs, cli-loader.mjs);',
     '`--help` prints the copy yargs rendered at build time; `count` of a built-in theory loads no zod, SQLite, piscina or localization references.',
     'The n = 20 row includes the count itself (12 ms warm; cold, before the JIT has compiled the kernel, several times that).',
   ];
