@@ -1,4 +1,4 @@
-import { addPolyInPlace, addTermInPlace, constantPoly, mulPoly, polyTerms, polyText, variablePoly, type Polynomial } from '../engine/index.js';
+import { addTermInPlace, polyTerms, polyText, type Polynomial } from '../engine/index.js';
 
 /** How an equivariant value is written: in the roots z_m = y_{m+1} − y_m, expanded in y, or with its root factors pulled out. */
 export const VALUE_FORMS = ['roots', 'expanded', 'factored'] as const;
@@ -60,30 +60,20 @@ export function rootVariableName(k: number, size: number, names: readonly string
 function divideByRoot(f: Polynomial, i: number, j: number): Polynomial | undefined {
   const rest: Polynomial = new Map();
   const q: Polynomial = new Map();
-  for (const t of polyTerms(f, 0)) {
-    const e = [...t.exponents];
-    const ej = e[j] ?? 0;
-    const restE = [...e];
-    while (restE.length <= Math.max(i, j)) restE.push(0);
-    restE[i] = (restE[i] ?? 0) + ej;
-    restE[j] = 0;
-    addPolyInPlace(rest, monomial(t.coefficient, restE));
+  for (const t of polyTerms(f, Math.max(i, j) + 1)) {
+    const e = t.exponents;
+    const ej = e[j]!;
+    const ei = e[i]!;
+    e[i] = ei + ej;
+    e[j] = 0;
+    addTermInPlace(rest, e, t.coefficient);
     for (let a = 0; a < ej; a++) {
-      const qe = [...restE];
-      qe[i] = (e[i] ?? 0) + (ej - 1 - a);
-      qe[j] = a;
-      addPolyInPlace(q, monomial(t.coefficient, qe));
+      e[i] = ei + (ej - 1 - a);
+      e[j] = a;
+      addTermInPlace(q, e, t.coefficient);
     }
   }
   return rest.size === 0 ? q : undefined;
-}
-
-function monomial(c: bigint, exponents: readonly number[]): Polynomial {
-  let m = constantPoly(c);
-  exponents.forEach((e, k) => {
-    for (let i = 0; i < e; i++) m = mulPoly(m, variablePoly(k));
-  });
-  return m;
 }
 
 /** The factors y_j − y_i (i < j, with multiplicity) that divide p, and the cofactor left. */
