@@ -4,7 +4,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { countCompletions, integerSemiring, theoryPieceSet, triangleRegion } from '../../src/engine/index.js';
 import { grassmannianStrings } from '../../src/reference/grassmannian-strings.js';
-import { stringOfPartition } from '../support/boundaries.js';
+import { stringOfPartition } from '../helpers/boundaries.js';
 import type { BenchCase } from './measure-case.js';
 
 const here = dirname(fileURLToPath(import.meta.url));

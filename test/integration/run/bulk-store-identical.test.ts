@@ -3,8 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { cli, query } from '../../e2e/cli-process.js';
-import { exchangeReverseClaim } from '../../support/exchange-reverse-brute-force.js';
-import { expectSameStore } from '../../support/same-store.js';
+import { exchangeReverseClaim } from '../../helpers/exchange-reverse-brute-force.js';
+import { expectSameStore } from '../../helpers/same-store.js';
 
 // The bulk path (class value tables, src/claims/family-scan.ts) must write exactly the store the
 // per-instance path writes (PUZZLESWEEP_PER_INSTANCE=1): same chunks and tallies, same counterexample rows

@@ -3,8 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { cli, query } from '../../e2e/cli-process.js';
-import { exchangeReverseClaim } from '../../support/exchange-reverse-brute-force.js';
-import { expectSameStore } from '../../support/same-store.js';
+import { exchangeReverseClaim } from '../../helpers/exchange-reverse-brute-force.js';
+import { expectSameStore } from '../../helpers/same-store.js';
 
 // A sweep in the main thread (--workers 0, or a small family without --workers) must write exactly the
 // store a sweep on worker threads writes: same chunks and tallies, same counterexample rows (pair partners

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { cli, query } from '../../e2e/cli-process.js';
-import { resultRows } from '../../support/same-store.js';
+import { resultRows } from '../../helpers/same-store.js';
 
 // A modular sweep (residue codes in class value tables, src/claims/residue-tables.ts) must store the verdicts
 // and counts an --exact sweep stores: same chunks and tallies, same counterexample rows (each confirmed

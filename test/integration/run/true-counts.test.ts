@@ -6,7 +6,7 @@ import { loadSweepClaim } from '../../../src/run/load-sweep-claim.js';
 import { parseRunOptions } from '../../../src/run/run-options.js';
 import { runSweep } from '../../../src/run/run-sweep.js';
 import { listCounterexamples, openStore } from '../../../src/store/index.js';
-import { exchangeReverseClaim, exchangeReverseFailures } from '../../support/exchange-reverse-brute-force.js';
+import { exchangeReverseClaim, exchangeReverseFailures } from '../../helpers/exchange-reverse-brute-force.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-counts-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));

@@ -9,7 +9,7 @@ import { parseRunOptions } from '../../../src/run/run-options.js';
 import { runSweep } from '../../../src/run/run-sweep.js';
 import { classTallies, listCounterexamples, openStore, pendingPartnerCount } from '../../../src/store/index.js';
 import { STORE_MIGRATIONS } from '../../../src/store/store-migrations.js';
-import { exchangeReverseFailures } from '../../support/exchange-reverse-brute-force.js';
+import { exchangeReverseFailures } from '../../helpers/exchange-reverse-brute-force.js';
 
 const fixture = fileURLToPath(new URL('../../fixtures/stores/schema-2/', import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-migrate-'));

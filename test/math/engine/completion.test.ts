@@ -7,7 +7,7 @@ import {
   polynomialSemiring,
   theoryPieceSet,
 } from '../../../src/engine/index.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 
 // Compares a region's own value with its completed triangle's on every 0/1 labeling of every region
 // whose completed triangle has side ≤ 4 (68 shapes, 28,224 labelings).

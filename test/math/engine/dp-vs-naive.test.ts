@@ -21,7 +21,7 @@ import { naiveCountAtPoints } from '../../../src/reference/naive-count-at-point.
 import { toTerms } from '../../../src/reference/ref-polynomial.js';
 import { resolveTheory } from '../../../src/claims/resolve-theory.js';
 import { CodedError } from '../../../src/errors/index.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 
 const canonical = (terms: readonly { coefficient: bigint; exponents: readonly number[] }[]) =>
   terms.map((t) => `${t.coefficient}*${t.exponents.join(',')}`).sort().join(' + ');

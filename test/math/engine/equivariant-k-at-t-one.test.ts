@@ -3,7 +3,7 @@ import { countBoundary, fractionDenominator, fractionSemiring, makeRegion, theor
 import { resolveTheory } from '../../../src/claims/resolve-theory.js';
 import { naiveCount } from '../../../src/reference/naive-count.js';
 import { toTerms } from '../../../src/reference/ref-polynomial.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 
 // A value at t_1 = … = t_N = 1: its numerator's coefficients summed over the denominator's.
 const atOne = (p: ReadonlyMap<string, bigint>) => [...p.values()].reduce((a, c) => a + c, 0n);

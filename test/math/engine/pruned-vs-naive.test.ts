@@ -15,7 +15,7 @@ import {
 } from '../../../src/engine/index.js';
 import { naiveCount } from '../../../src/reference/naive-count.js';
 import { toTerms } from '../../../src/reference/ref-polynomial.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 
 const STRATEGIES: readonly SweepStrategy[] = ['forward', 'backward', 'meet'];
 

@@ -8,7 +8,7 @@ import {
   polyEquals,
   theoryPieceSet,
 } from '../../../src/engine/index.js';
-import { regionShapes } from '../../support/boundaries.js';
+import { regionShapes } from '../../helpers/boundaries.js';
 
 // A seeded generator (mulberry32), so a failure names a reproducible boundary.
 function generator(seed: number): () => number {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { countBoundary, enumeratePuzzles, fillingCountSemiring, integerSemiring, makeRegion, theoryPieceSet } from '../../../src/engine/index.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 import { checkPuzzle } from '../../helpers/check-puzzle.js';
 
 describe('enumeratePuzzles on every labeling with N ≤ 3', () => {

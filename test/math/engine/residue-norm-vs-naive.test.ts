@@ -4,7 +4,7 @@ import { resolveTheory } from '../../../src/claims/resolve-theory.js';
 import { naiveCount, naiveSum, type NaivePiece } from '../../../src/reference/naive-count.js';
 import type { RefPolynomial } from '../../../src/reference/ref-polynomial.js';
 import { CodedError } from '../../../src/errors/index.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 
 // The one-sweep modular semiring (residues at a random point modulo each prime, plus a bound lane holding
 // Σ over puzzles of Π ‖weight‖₁) against plain backtracking over unit triangles (src/reference), on every

@@ -16,7 +16,7 @@ import {
   type Polynomial,
 } from '../../../src/engine/index.js';
 import { lrTable } from '../../../src/reference/lr-rule.js';
-import { contains, grassmannianStrings, inversions, partitionOfString, stringOfPartition } from '../../support/boundaries.js';
+import { contains, grassmannianStrings, inversions, partitionOfString, stringOfPartition } from '../../helpers/boundaries.js';
 
 const reverse = (s: string) => [...s].reverse().join('');
 

@@ -4,7 +4,7 @@ import { familyCells, type SharedView } from '../../../src/claims/family-cells.j
 import { compileClaimProgram, createEvaluator, planClaim } from '../../../src/claims/index.js';
 import { TABLE_PARTS, tableShape } from '../../../src/claims/shared-tables.js';
 import { integerSemiring } from '../../../src/engine/index.js';
-import { exchangeReverseFailures, exchangeReverseClaim } from '../../support/exchange-reverse-brute-force.js';
+import { exchangeReverseFailures, exchangeReverseClaim } from '../../helpers/exchange-reverse-brute-force.js';
 
 const tally = (): ScanTally => ({ checked: 0, holds: 0, skippedZero: 0, paired: 0, vacuous: 0, nonzero: 0 });
 

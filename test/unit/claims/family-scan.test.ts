@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { ScanTally } from '../../../src/claims/claim-api.js';
 import { compileClaimProgram, createEvaluator, planClaim } from '../../../src/claims/index.js';
 import { tableShape } from '../../../src/claims/shared-tables.js';
-import { exchangeReverseClaim, exchangeReverseFailures } from '../../support/exchange-reverse-brute-force.js';
+import { exchangeReverseClaim, exchangeReverseFailures } from '../../helpers/exchange-reverse-brute-force.js';
 
 const tally = (): ScanTally => ({ checked: 0, holds: 0, skippedZero: 0, paired: 0, vacuous: 0, nonzero: 0 });
 

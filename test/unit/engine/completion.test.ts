@@ -7,7 +7,7 @@ import {
   polynomialSemiring,
   theoryPieceSet,
 } from '../../../src/engine/index.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 
 // The quick loop; test/math/engine/completion.test.ts checks every labeling with N ≤ 4 in every theory.
 describe('completion to a triangle', () => {

@@ -12,7 +12,7 @@ import {
   theoryPieceSet,
   FAMILY_SIDE_ORDER,
 } from '../../../src/engine/index.js';
-import { binaryStrings } from '../../support/boundaries.js';
+import { binaryStrings } from '../../helpers/boundaries.js';
 
 // Walks every index of a family table and the boundary it stands for (side 5 least significant).
 function* entries(candidates: readonly (readonly string[])[]): Generator<{ index: number; sides: string[] }> {

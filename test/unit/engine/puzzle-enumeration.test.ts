@@ -8,7 +8,7 @@ import {
   theoryPieceSet,
   type Puzzle,
 } from '../../../src/engine/index.js';
-import { labelings, regionShapes } from '../../support/boundaries.js';
+import { labelings, regionShapes } from '../../helpers/boundaries.js';
 import { expectDeterministicEnumeration } from '../../helpers/contracts.js';
 import { checkPuzzle } from '../../helpers/check-puzzle.js';
 

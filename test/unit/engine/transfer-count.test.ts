@@ -16,7 +16,7 @@ import {
   sweep,
 } from '../../../src/engine/index.js';
 import { compilePlan } from '../../../src/engine/transfer-plan.js';
-import { binaryStrings, stringOfPartition } from '../../support/boundaries.js';
+import { binaryStrings, stringOfPartition } from '../../helpers/boundaries.js';
 
 const count = (theory: string, l: string, m: string, n: string) =>
   countBoundary(triangleRegion(l.length), structureConstantSides(l, m, n), theoryPieceSet(theory), { semiring: integerSemiring });

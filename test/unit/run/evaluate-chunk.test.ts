@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { compileClaimProgram, createEvaluator, planClaim } from '../../../src/claims/index.js';
 import { evaluateChunk } from '../../../src/run/evaluate-chunk.js';
-import { exchangeReverseClaim, exchangeReverseFailures } from '../../support/exchange-reverse-brute-force.js';
+import { exchangeReverseClaim, exchangeReverseFailures } from '../../helpers/exchange-reverse-brute-force.js';
 
 const key = (sides: readonly string[]) => [sides[0], sides[1], sides[3], sides[4]].join('|');
 
