@@ -11,14 +11,17 @@ export const MAX_ATTEMPTS = 3;
 export const TASKS_PER_THREAD = 2;
 
 // The worker always runs compiled JavaScript: under vitest this module is a .ts source in src/, so point at dist/.
-// The build's one-file bundle of the worker (src/build/bundle-worker.mjs) starts faster than ~60 modules.
+// The build's loader of its one-file worker bundle with a code cache (src/build/bundle-worker.mjs) starts faster than ~60 modules.
 // '../run/' resolves to dist/run/ both from this module (dist/run/) and from the CLI's bundle (dist/cli/).
 function workerEntryUrl(): string {
   const here = fileURLToPath(import.meta.url);
   const dir = here.endsWith('.ts') ? here.replace(/[\\/]src[\\/]run[\\/][^\\/]+\.ts$/, '/dist/run') : join(dirname(here), '..', 'run');
-  const bundle = join(dir, 'sweep-worker.bundle.js');
+  const bundle = join(dir, 'sweep-worker.loader.mjs');
   return pathToFileURL(existsSync(bundle) ? bundle : join(dir, 'sweep-worker.js')).href;
 }
+
+/** Heap limits of each worker thread (a test starts a thread with the same ones to check its code cache). */
+export const WORKER_RESOURCE_LIMITS = { maxYoungGenerationSizeMb: 16 } as const;
 
 /** Where a sweep's tasks run: worker threads (`WorkerPool`) or the main thread (`InProcessRunner`). */
 export interface TaskRunner {
@@ -42,7 +45,7 @@ export class WorkerPool implements TaskRunner {
   constructor(readonly size: number) {
     // Two tasks per thread: the next chunk already waits in the thread's own queue when one finishes, so the
     // thread never idles until the main thread (busy storing, or descheduled on a loaded machine) hands it one.
-    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, concurrentTasksPerWorker: TASKS_PER_THREAD, idleTimeout: 60_000, resourceLimits: { maxYoungGenerationSizeMb: 16 } });
+    this.pool = new Piscina({ filename: workerEntryUrl(), minThreads: size, maxThreads: size, concurrentTasksPerWorker: TASKS_PER_THREAD, idleTimeout: 60_000, resourceLimits: WORKER_RESOURCE_LIMITS });
   }
 
   /** Runs one task; a dead worker means another try on a fresh one, up to MAX_ATTEMPTS. */

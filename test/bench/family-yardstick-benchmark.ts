@@ -77,7 +77,7 @@ export default async function familyYardstickBenchmark(): Promise<string> {
     const sixEngine = median([0, 1, 2].map(() => timed(['node', join(here, 'family-case.mjs'), 'cohomology', '6,6,0,6,6,0', '1', '4'])));
     const bare = median([0, 1, 2, 3, 4].map(() => timed(['node', '-e', '0'])));
     const help = median([0, 1, 2, 3, 4].map(() => timed(['node', cli, '--help'])));
-    const workerLoad = median([0, 1, 2, 3, 4].map(() => timed(['node', '--input-type=module', '-e', `await import(${JSON.stringify(join(root, 'dist', 'run', 'sweep-worker.bundle.js'))})`])));
+    const workerLoad = median([0, 1, 2, 3, 4].map(() => timed(['node', '--input-type=module', '-e', `await import(${JSON.stringify(join(root, 'dist', 'run', 'sweep-worker.loader.mjs'))})`])));
     loads.push(loadavg()[0]!.toFixed(1));
     const sixPy = timed(['python3', python, 'family', 'cohomology', '6,6,0,6,6,0', '1', '4']);
     loads.push(loadavg()[0]!.toFixed(1));
