@@ -12,6 +12,7 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'n
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { writeTrainingClaim } from './training-claim.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outdir = join(root, 'dist', 'cli');
@@ -110,18 +111,7 @@ writeFileSync(join(outdir, 'help.txt'), help.stdout);
 const cache = join(outdir, `main-bundle.${buildId}.cache`);
 const work = mkdtempSync(join(tmpdir(), 'puzzlesweep-build-'));
 try {
-  const claim = join(work, 'training.json');
-  writeFileSync(
-    claim,
-    JSON.stringify({
-      id: 'training',
-      statement: 'Exchanging sides 1 and 4 keeps the cohomology value.',
-      theory: 'cohomology',
-      family: { sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }], conditions: [{ type: 'sameContent', sides: [1, 4] }] },
-      transform: [{ type: 'exchange', sides: [1, 4] }],
-      compare: { measure: { type: 'value' }, relation: { type: 'equal' } },
-    }),
-  );
+  const claim = writeTrainingClaim(work);
   const db = join(work, 'training.sqlite');
   for (const args of [['run', claim, '--db', db, '--json'], ['count', '--theory', 'cohomology', '--partitions', '31,21,421', '--grassmannian', '3,7'], ['status', '--db', db]]) {
     const r = cli(args, { PUZZLESWEEP_WRITE_CODE_CACHE: cache }, work);

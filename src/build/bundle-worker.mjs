@@ -11,6 +11,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSy
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { writeTrainingClaim } from './training-claim.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outdir = join(root, 'dist', 'run');
@@ -56,18 +57,7 @@ writeFileSync(join(outdir, 'sweep-worker.loader.mjs'), loader);
 const cache = join(outdir, `sweep-worker.bundle.${buildId}.cache`);
 const work = mkdtempSync(join(tmpdir(), 'puzzlesweep-build-'));
 try {
-  const claim = join(work, 'training.json');
-  writeFileSync(
-    claim,
-    JSON.stringify({
-      id: 'training',
-      statement: 'Exchanging sides 1 and 4 keeps the cohomology value.',
-      theory: 'cohomology',
-      family: { sides: ['a', 'b', 0, 'a', 'b', 0], variables: [{ name: 'a', min: 1, max: 2 }, { name: 'b', min: 1, max: 2 }], conditions: [{ type: 'sameContent', sides: [1, 4] }] },
-      transform: [{ type: 'exchange', sides: [1, 4] }],
-      compare: { measure: { type: 'value' }, relation: { type: 'equal' } },
-    }),
-  );
+  const claim = writeTrainingClaim(work);
   const r = spawnSync(process.execPath, [join(root, 'dist', 'cli', 'main.js'), 'run', claim, '--db', join(work, 'training.sqlite'), '--workers', '1', '--json'], {
     encoding: 'utf8',
     cwd: work,

@@ -55,3 +55,14 @@ export function exchangeReverseFailures(a: number, b: number): { failing: string
   }
   return { failing, instances };
 }
+
+/**
+ * The failing boundaries a scan handed on, as `s1|s2|s4|s5`: each handed boundary b and its image
+ * T(b) = (rev s4, s2, rev s1, s5), written out by hand from README's step definitions (the pair fails together).
+ */
+export function handedFailingPairs(handed: readonly bigint[], sidesAt: (index: bigint) => readonly string[]): string[] {
+  return handed.flatMap((i) => {
+    const [s1, s2, , s4, s5] = sidesAt(i);
+    return [[s1, s2, s4, s5], [rev(s4!), s2, rev(s1!), s5]].map((x) => x.join('|'));
+  });
+}

@@ -4,7 +4,7 @@ import { familyCells, type SharedView } from '../../../src/claims/family-cells.j
 import { compileClaimProgram, createEvaluator, planClaim } from '../../../src/claims/index.js';
 import { TABLE_PARTS, tableShape } from '../../../src/claims/shared-tables.js';
 import { integerSemiring } from '../../../src/engine/index.js';
-import { exchangeReverseFailures, exchangeReverseClaim } from '../../helpers/exchange-reverse-brute-force.js';
+import { exchangeReverseFailures, exchangeReverseClaim, handedFailingPairs } from '../../helpers/exchange-reverse-brute-force.js';
 
 const tally = (): ScanTally => ({ checked: 0, holds: 0, skippedZero: 0, paired: 0, vacuous: 0, nonzero: 0 });
 
@@ -36,13 +36,9 @@ describe('shared value tables: a worker that would wait computes parts of the ce
       const t = tally();
       const handed: bigint[] = [];
       expect(evaluator.scan!(cls, 0n, plan.instanceCount(cls), t, (i) => handed.push(i), tables)).toBe(true);
-      // The failing set by naive backtracking and the steps written out by hand (test/support).
+      // The failing set by naive backtracking and the steps written out by hand (test/helpers).
       const brute = exchangeReverseFailures(cls.lengths[0], cls.lengths[1]);
-      const failing = handed.flatMap((i) => {
-        const [s1, s2, , s4, s5] = plan.instanceAt(cls, i).sides as string[];
-        const rev = (w: string) => [...w].reverse().join('');
-        return [[s1, s2, s4, s5], [rev(s4!), s2, rev(s1!), s5]].map((x) => x.join('|'));
-      });
+      const failing = handedFailingPairs(handed, (i) => plan.instanceAt(cls, i).sides as string[]);
       expect(new Set(failing), cls.key).toEqual(new Set(brute.failing));
       expect(t.holds + t.skippedZero + failing.length, cls.key).toBe(brute.instances);
     }

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { ScanTally } from '../../../src/claims/claim-api.js';
 import { compileClaimProgram, createEvaluator, planClaim } from '../../../src/claims/index.js';
 import { tableShape } from '../../../src/claims/shared-tables.js';
-import { exchangeReverseClaim, exchangeReverseFailures } from '../../helpers/exchange-reverse-brute-force.js';
+import { exchangeReverseClaim, exchangeReverseFailures, handedFailingPairs } from '../../helpers/exchange-reverse-brute-force.js';
 
 const tally = (): ScanTally => ({ checked: 0, holds: 0, skippedZero: 0, paired: 0, vacuous: 0, nonzero: 0 });
 
@@ -21,14 +21,10 @@ describe('the bulk scan (value tables compared by index arithmetic)', () => {
         const handed: bigint[] = [];
         expect(evaluator.scan!(cls, 0n, count, t, (i) => handed.push(i), tables)).toBe(true);
         handedTotal += handed.length;
-        // The failing set by naive backtracking and the steps written out by hand (test/support).
+        // The failing set by naive backtracking and the steps written out by hand (test/helpers).
         const brute = exchangeReverseFailures(cls.lengths[0], cls.lengths[1]);
         // A handed boundary and its image T(b) = (rev s4, s2, rev s1, s5) are the failing pair.
-        const failing = handed.flatMap((i) => {
-          const [s1, s2, , s4, s5] = plan.instanceAt(cls, i).sides as string[];
-          const rev = (w: string) => [...w].reverse().join('');
-          return [[s1, s2, s4, s5], [rev(s4!), s2, rev(s1!), s5]].map((x) => x.join('|'));
-        });
+        const failing = handedFailingPairs(handed, (i) => plan.instanceAt(cls, i).sides as string[]);
         expect(new Set(failing), cls.key).toEqual(new Set(brute.failing));
         // Every boundary is counted once: decided here (a pair's representative counts both), or handed on.
         expect(t.holds + t.skippedZero + failing.length, cls.key).toBe(brute.instances);
