@@ -7,12 +7,11 @@
 // Then renders the top-level --help once with yargs into dist/cli/help.txt (the loader prints that copy).
 import { build } from 'esbuild';
 import { spawnSync } from 'node:child_process';
-import { createHash } from 'node:crypto';
 import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { writeTrainingClaim } from './training-claim.mjs';
+import { writeBundleAndLoader, writeTrainingClaim } from './code-cache-build.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outdir = join(root, 'dist', 'cli');
@@ -86,17 +85,7 @@ if (moved.length > 0) {
   process.exit(1);
 }
 
-let bundleText = '';
-for (const file of result.outputFiles) {
-  // The loader wraps the bundle in a function, where main.ts's #! line would not parse.
-  const text = file.path.endsWith('.cjs') ? file.text.replace(/^#!.*/, '') : file.text;
-  if (file.path.endsWith('.cjs')) bundleText = text;
-  writeFileSync(file.path, text);
-}
-// The cache's name carries a hash of the bundle, so a loader never reads the cache of another build.
-const buildId = createHash('sha256').update(bundleText).digest('hex').slice(0, 16);
-const loader = readFileSync(join(root, 'src', 'build', 'cli-loader.mjs'), 'utf8').replace("'__PUZZLESWEEP_BUILD__'", JSON.stringify(buildId));
-writeFileSync(join(outdir, 'main.js'), loader, { mode: 0o755 });
+const buildId = writeBundleAndLoader(result.outputFiles, 'cli-loader.mjs', join(outdir, 'main.js'), 0o755);
 
 const cli = (args, env = {}, cwd = root) => spawnSync(process.execPath, [join(outdir, 'main.js'), ...args], { encoding: 'utf8', cwd, env: { ...process.env, ...env } });
 const help = cli(['--help'], { PUZZLESWEEP_RENDER_HELP: '1' });

@@ -6,12 +6,11 @@
 // so a CodedError thrown by the claims layer is still one `instanceof` knows.
 import { build } from 'esbuild';
 import { spawnSync } from 'node:child_process';
-import { createHash } from 'node:crypto';
-import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { writeTrainingClaim } from './training-claim.mjs';
+import { writeBundleAndLoader, writeTrainingClaim } from './code-cache-build.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outdir = join(root, 'dist', 'run');
@@ -43,15 +42,7 @@ if (moved.length > 0) {
   process.exit(1);
 }
 
-let bundleText = '';
-for (const file of result.outputFiles) {
-  if (file.path.endsWith('.cjs')) bundleText = file.text;
-  writeFileSync(file.path, file.text);
-}
-// The cache's name carries a hash of the bundle, so a loader never reads the cache of another build.
-const buildId = createHash('sha256').update(bundleText).digest('hex').slice(0, 16);
-const loader = readFileSync(join(root, 'src', 'build', 'worker-loader.mjs'), 'utf8').replace("'__PUZZLESWEEP_BUILD__'", JSON.stringify(buildId));
-writeFileSync(join(outdir, 'sweep-worker.loader.mjs'), loader);
+const buildId = writeBundleAndLoader(result.outputFiles, 'worker-loader.mjs', join(outdir, 'sweep-worker.loader.mjs'));
 
 // Training run: a small sweep of a claim of our own on one worker thread; the worker writes the cache after each task.
 const cache = join(outdir, `sweep-worker.bundle.${buildId}.cache`);

@@ -4,34 +4,20 @@
 // bundle was most of a worker's start before its first chunk. A cache V8 rejects (another Node version, other V8
 // flags) is ignored and the bundle compiles as usual; a cache from another build is never read (its name carries
 // the build's hash of the bundle). Exports the bundle's task handler as piscina's default export.
-import { readFileSync, writeFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
+import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import vm from 'node:vm';
+// dist/cached-bundle.mjs, copied there by the build from src/build/cached-bundle.mjs.
+import { compileBundle, runBundle } from '../cached-bundle.mjs';
 
 const BUILD = '__PUZZLESWEEP_BUILD__';
 const dir = fileURLToPath(new URL('.', import.meta.url));
 const bundle = `${dir}sweep-worker.bundle.cjs`;
 
-/** The file's bytes, or undefined when it cannot be read. */
-function tryRead(file) {
-  try {
-    return readFileSync(file);
-  } catch {
-    return undefined;
-  }
-}
-
-const cachedData = tryRead(`${dir}sweep-worker.bundle.${BUILD}.cache`);
-// The CommonJS wrapper on the bundle's first line, so its line numbers stay the bundle's own; strict, as the ES
-// modules it was bundled from.
-const source = `(function (exports, require, module, __filename, __dirname) {'use strict';${readFileSync(bundle, 'utf8')}\n})`;
-const script = new vm.Script(source, { filename: bundle, ...(cachedData ? { cachedData } : {}) });
+const compiled = compileBundle(bundle, `${dir}sweep-worker.bundle.${BUILD}.cache`);
+const script = compiled.script;
 /** Whether this thread compiled the bundle from the build's cache ('accepted'); a test reads it. */
-export const codeCache = cachedData === undefined ? 'absent' : script.cachedDataRejected ? 'rejected' : 'accepted';
-const module = { exports: {} };
-script.runInThisContext()(module.exports, createRequire(bundle), module, bundle, dir);
-const bundled = module.exports.default;
+export const codeCache = compiled.codeCache;
+const bundled = runBundle(script, bundle).default;
 // In Node 20 a function compiled from a code cache cannot import() ("A dynamic import callback was not specified",
 // whatever importModuleDynamically says), so a task that names its runtime module by URL (a test double,
 // src/run/claim-runtime-module.ts) runs through tsc's unbundled worker module instead, loaded on first need.
