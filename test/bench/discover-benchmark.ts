@@ -4,6 +4,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { hexagonFamily } from '../helpers/hexagon-family.js';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 
@@ -38,17 +39,7 @@ const parallelogram = (max: number) => ({
   ],
 });
 
-const hexagon = {
-  sides: ['a', 0, 'b', 'a', 0, 'b'],
-  variables: [
-    { name: 'a', min: 1, max: 3 },
-    { name: 'b', min: 1, max: 3 },
-  ],
-  conditions: [
-    { type: 'sameContent', sides: [1, 4] },
-    { type: 'sameContent', sides: [3, 6] },
-  ],
-};
+const hexagon = hexagonFamily(3);
 
 export default async function discoverBenchmark(): Promise<string> {
   const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-bench-discover-'));

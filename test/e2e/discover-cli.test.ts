@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { cli } from './cli-process.js';
+import { hexagonFamily } from '../helpers/hexagon-family.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'puzzlesweep-discover-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -13,17 +14,7 @@ writeFileSync(
   familyFile,
   JSON.stringify({
     id: 'hex',
-    family: {
-      sides: ['a', 0, 'b', 'a', 0, 'b'],
-      variables: [
-        { name: 'a', min: 1, max: 2 },
-        { name: 'b', min: 1, max: 2 },
-      ],
-      conditions: [
-        { type: 'sameContent', sides: [1, 4] },
-        { type: 'sameContent', sides: [3, 6] },
-      ],
-    },
+    family: hexagonFamily(2),
     space: { complement: ['none'] },
   }),
 );

@@ -2,18 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { createEvaluator, parseClaim, planClaim } from '../../../src/claims/index.js';
 import { parseDiscoverInput, theoryInput } from '../../../src/discover/discover-input.js';
 import { runDiscover } from '../../../src/discover/run-discover.js';
+import { hexagonFamily } from '../../helpers/hexagon-family.js';
 
-const family = {
-  sides: ['a', 0, 'b', 'a', 0, 'b'],
-  variables: [
-    { name: 'a', min: 1, max: 2 },
-    { name: 'b', min: 1, max: 2 },
-  ],
-  conditions: [
-    { type: 'sameContent', sides: [1, 4] },
-    { type: 'sameContent', sides: [3, 6] },
-  ],
-};
+const family = hexagonFamily(2);
 
 describe('discover on (a,0,b,a,0,b) with Laurent values (equivariant K-theory rhombus file)', () => {
   const result = runDiscover(parseDiscoverInput({ id: 'eqk', family }, [theoryInput('conjectures/pieces/equivariant-k-theory-rhombi.json')]), { max: {}, db: ':memory:' });

@@ -2,19 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { createEvaluator, parseClaim, planClaim } from '../../../src/claims/index.js';
 import { parseDiscoverInput } from '../../../src/discover/discover-input.js';
 import { runDiscover } from '../../../src/discover/run-discover.js';
+import { hexagonFamily } from '../../helpers/hexagon-family.js';
 
 // The second check: (a,0,b,a,0,b) in equivariant cohomology, opposite sides of equal content.
-const family = {
-  sides: ['a', 0, 'b', 'a', 0, 'b'],
-  variables: [
-    { name: 'a', min: 1, max: 3 },
-    { name: 'b', min: 1, max: 3 },
-  ],
-  conditions: [
-    { type: 'sameContent', sides: [1, 4] },
-    { type: 'sameContent', sides: [3, 6] },
-  ],
-};
+const family = hexagonFamily(3);
 
 describe('discover on (a,0,b,a,0,b) in equivariant cohomology', () => {
   const result = runDiscover(parseDiscoverInput({ id: 'eq', family }, ['equivariant']), { max: {}, db: ':memory:' });
